@@ -1,7 +1,22 @@
+import react from '@vitejs/plugin-react';
+import tailwindcss from '@tailwindcss/vite';
 import { defineConfig } from 'vitest/config';
 
 // Vite builds the client from index.html; Vitest reads the `test` block.
 export default defineConfig({
+  plugins: [react(), tailwindcss()],
+  build: {
+    outDir: 'dist/client',
+    emptyOutDir: true,
+    // Every asset becomes a file: the server's CSP allows fonts and images from 'self'
+    // only, so no data: URIs may appear in the built CSS.
+    assetsInlineLimit: 0,
+  },
+  server: {
+    proxy: {
+      '/api': 'http://localhost:3000',
+    },
+  },
   test: {
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/e2e/**', 'node_modules/**'],

@@ -1,0 +1,21 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiError } from './api-client';
+
+// A 4xx says the request itself is wrong, so asking again cannot help; only
+// network failures and 5xx are retried.
+function shouldRetry(failureCount: number, error: unknown): boolean {
+  if (error instanceof ApiError && error.status >= 400 && error.status < 500) return false;
+  return failureCount < 2;
+}
+
+export function createQueryClient(): QueryClient {
+  return new QueryClient({
+    defaultOptions: {
+      queries: {
+        staleTime: 30_000,
+        retry: shouldRetry,
+        refetchOnWindowFocus: false,
+      },
+    },
+  });
+}
