@@ -1,0 +1,87 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { createServer } from 'node:net';
+import { join } from 'node:path';
+import { repoRoot } from './paths';
+
+export interface RunningServer {
+  url: string;
+  output: () => string;
+  stop: () => Promise<void>;
+}
+
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = createServer();
+    probe.unref();
+    probe.on('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      if (address === null || typeof address === 'string') return reject(new Error('no port'));
+      probe.close(() => resolve(address.port));
+    });
+  });
+}
+
+function exited(child: ChildProcess): Promise<void> {
+  if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
+  return new Promise((resolve) => child.once('exit', () => resolve()));
+}
+
+async function waitForHealth(url: string, child: ChildProcess, output: () => string, timeoutMs: number) {
+  const deadline = Date.now() + timeoutMs;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) {
+      throw new Error(`server exited with code ${child.exitCode} before answering:\n${output()}`);
+    }
+    try {
+      const response = await fetch(`${url}/api/health`);
+      if (response.ok) return;
+    } catch {
+      // not listening yet
+    }
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  throw new Error(`server did not answer /api/health within ${timeoutMs} ms:\n${output()}`);
+}
+
+/** Start the production server (server/index.ts serving dist/client) on a free port. */
+export async function startBuiltServer(env: Record<string, string> = {}): Promise<RunningServer> {
+  const port = await freePort();
+  // The browser tests use an in-memory database unless a caller asks otherwise, even
+  // when the surrounding shell (CI) has DATABASE_URL set for the database suite.
+  const childEnv: Record<string, string | undefined> = {
+    ...process.env,
+    NODE_ENV: 'production',
+    LOG_LEVEL: 'warn',
+    DATA_DIR: 'memory',
+    ...env,
+    PORT: String(port),
+  };
+  if (env.DATABASE_URL === undefined) delete childEnv.DATABASE_URL;
+  const child = spawn(join(repoRoot, 'node_modules/.bin/tsx'), ['server/index.ts'], {
+    cwd: repoRoot,
+    env: childEnv,
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let log = '';
+  child.stdout?.on('data', (chunk: Buffer) => (log += chunk.toString()));
+  child.stderr?.on('data', (chunk: Buffer) => (log += chunk.toString()));
+  const output = () => log;
+  const url = `http://127.0.0.1:${port}`;
+
+  const stop = async () => {
+    if (child.exitCode !== null || child.signalCode !== null) return;
+    const killTimer = setTimeout(() => child.kill('SIGKILL'), 10_000);
+    child.kill('SIGTERM');
+    await exited(child);
+    clearTimeout(killTimer);
+  };
+
+  try {
+    await waitForHealth(url, child, output, 90_000);
+  } catch (error) {
+    await stop();
+    throw error;
+  }
+  return { url, output, stop };
+}
