@@ -23,7 +23,7 @@ export function TongSketch({ className = '' }: { className?: string }) {
           <path d="M20 0 L0 0 0 20" fill="none" className="stroke-ink-100" strokeWidth="1" />
         </pattern>
       </defs>
-      <rect width="320" height="300" rx="16" fill="url(#tong-sketch-grid)" />
+      <rect x="1" y="1" width="318" height="298" rx="16" fill="url(#tong-sketch-grid)" className="stroke-ink-200" strokeWidth="1.5" />
 
       {/* the block being lifted */}
       <rect x="112" y="206" width="96" height="62" rx="3" className="fill-paper-300 stroke-ink-400" strokeWidth="1.5" />

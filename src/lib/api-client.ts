@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type { z } from './zod';
 
 /** One failing input, as the API names it: a path into the request and a reason. */
 export interface FieldProblem {

@@ -55,7 +55,7 @@ export function HomeRoute() {
               </Link>
             </div>
           </div>
-          <TongSketch className="mx-auto w-full max-w-sm" />
+          <TongSketch className="mx-auto w-full max-w-[16rem] md:max-w-sm" />
         </div>
       </section>
 

@@ -42,7 +42,7 @@ export async function watchContext(context: BrowserContext): Promise<PageProblem
     document.addEventListener('securitypolicyviolation', (event) => {
       const report = (window as unknown as { __pinworkReportViolation: (t: string) => void })
         .__pinworkReportViolation;
-      report(`${event.effectiveDirective} blocked ${event.blockedURI || 'inline'}`);
+      report(`${event.effectiveDirective} blocked ${event.blockedURI || "inline"} at ${event.sourceFile}:${event.lineNumber}:${event.columnNumber}`);
     });
   });
 

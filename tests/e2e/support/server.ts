@@ -44,8 +44,16 @@ async function waitForHealth(url: string, child: ChildProcess, output: () => str
   throw new Error(`server did not answer /api/health within ${timeoutMs} ms:\n${output()}`);
 }
 
-/** Start the production server (server/index.ts serving dist/client) on a free port. */
+/**
+ * Start the production server (server/index.ts serving dist/client) on a free port.
+ * E2E_BASE_URL points the tests at a server that is already running instead (for
+ * instance `npm run dev` on http://localhost:5173); nothing is started or stopped then.
+ */
 export async function startBuiltServer(env: Record<string, string> = {}): Promise<RunningServer> {
+  const external = process.env.E2E_BASE_URL;
+  if (external) {
+    return { url: external.replace(/\/$/, ''), output: () => '', stop: async () => {} };
+  }
   const port = await freePort();
   // The browser tests use an in-memory database unless a caller asks otherwise, even
   // when the surrounding shell (CI) has DATABASE_URL set for the database suite.

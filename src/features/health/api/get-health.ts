@@ -1,5 +1,5 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import { z } from '../../../lib/zod';
 import { apiRequest } from '../../../lib/api-client';
 
 // The server reports the database either as a plain word or as an object with a
