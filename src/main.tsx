@@ -1,3 +1,5 @@
+// First: configures zod before anything can parse with it.
+import './lib/zod';
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
 import '@fontsource/manrope/latin-400.css';
