@@ -1,0 +1,208 @@
+import type { CompiledTemplate, DirectionPlan } from '../compile-template';
+import { EngineError } from '../errors';
+import type { SolveEnv } from '../solve-env';
+
+/**
+ * The equilibrium system A x = b of one configuration: three rows per rigid part (ΣFx, ΣFy,
+ * ΣM about the part's centroid, the moment row divided by a length scale so that every
+ * entry is of order one and pivot sizes can be compared), one column per unknown.
+ */
+export interface Assembled {
+  m: number;
+  n: number;
+  a: Float64Array;
+  b: Float64Array;
+  /** Unit force direction of each column (for slipping contacts: n + sμt, not unit). */
+  ux: Float64Array;
+  uy: Float64Array;
+  /** Unit normal of each joint (roller, contact), NaN for pins. */
+  nx: Float64Array;
+  ny: Float64Array;
+  /** Friction coefficient at slipping per joint, 0 otherwise. */
+  mu: Float64Array;
+  /** Length scale used for the moment rows, mm. */
+  length: number;
+  /** Largest known load, N (or N·mm / length for couples): the scale for residuals. */
+  loadScale: number;
+  /** Reference point per part (the moment centre of its third row). */
+  rx: Float64Array;
+  ry: Float64Array;
+  /** Known load components per load (couples: moment in fx). */
+  kfx: Float64Array;
+  kfy: Float64Array;
+  /** Unit direction of loads of unknown magnitude. */
+  dx: Float64Array;
+  dy: Float64Array;
+}
+
+export function unitDirection(d: DirectionPlan, env: SolveEnv, what: string, path: (string | number)[]): [number, number] {
+  if ('angle' in d) {
+    const a = (d.angle(env) * Math.PI) / 180;
+    if (!Number.isFinite(a)) throw new EngineError({ kind: 'expression', path, message: `${what}: the direction angle is not a finite number` });
+    return [Math.cos(a), Math.sin(a)];
+  }
+  const vx = env.px[d.to]! - env.px[d.from]!;
+  const vy = env.py[d.to]! - env.py[d.from]!;
+  const l = Math.hypot(vx, vy);
+  if (!(l > 0)) throw new EngineError({ kind: 'geometry', path, message: `${what}: the two points that give its direction coincide` });
+  return [vx / l, vy / l];
+}
+
+export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
+  const np = t.parts.length;
+  const m = 3 * np;
+  const n = t.columns.length;
+  const { px, py } = env;
+
+  // Length scale: the largest distance of any point from the centroid of all points.
+  let cx = 0;
+  let cy = 0;
+  const pc = px.length;
+  for (let i = 0; i < pc; i++) {
+    cx += px[i]!;
+    cy += py[i]!;
+  }
+  cx /= pc || 1;
+  cy /= pc || 1;
+  let length = 0;
+  for (let i = 0; i < pc; i++) length = Math.max(length, Math.hypot(px[i]! - cx, py[i]! - cy));
+  if (!(length > 0)) length = 1;
+  const invL = 1 / length;
+
+  const rx = new Float64Array(np);
+  const ry = new Float64Array(np);
+  t.parts.forEach((p, i) => {
+    let sx = 0;
+    let sy = 0;
+    for (const k of p.outline) {
+      sx += px[k]!;
+      sy += py[k]!;
+    }
+    rx[i] = sx / p.outline.length;
+    ry[i] = sy / p.outline.length;
+  });
+
+  const nj = t.joints.length;
+  const nx = new Float64Array(nj).fill(NaN);
+  const ny = new Float64Array(nj).fill(NaN);
+  const mu = new Float64Array(nj);
+  const ux = new Float64Array(n);
+  const uy = new Float64Array(n);
+
+  t.joints.forEach((j, i) => {
+    if (j.normal) {
+      const [a, b] = unitDirection(j.normal, env, `joint ${j.id}`, ['joints', i, 'normal']);
+      nx[i] = a;
+      ny[i] = b;
+    }
+    if (typeof j.friction === 'object') {
+      const c = j.friction.coefficient(env);
+      if (!Number.isFinite(c) || c < 0) {
+        throw new EngineError({ kind: 'expression', path: ['joints', i, 'friction'], message: `joint ${j.id}: the friction coefficient must be a finite number ≥ 0 (got ${c})` });
+      }
+      mu[i] = c * j.friction.sense;
+    }
+  });
+  const nm = t.members.length;
+  for (let i = 0; i < nm; i++) {
+    const mp = t.members[i]!;
+    const [e0, e1] = mp.ends;
+    const vx = px[e1]! - px[e0]!;
+    const vy = py[e1]! - py[e0]!;
+    const l = Math.hypot(vx, vy);
+    if (!(l > 1e-12 * length)) {
+      throw new EngineError({ kind: 'geometry', path: ['members', i], message: `member ${mp.id}: its ends ${t.pointNames[e0]} and ${t.pointNames[e1]} coincide, so its line of action is not defined` });
+    }
+    ux[mp.column] = vx / l;
+    uy[mp.column] = vy / l;
+  }
+  const nl = t.loads.length;
+  const kfx = new Float64Array(nl);
+  const kfy = new Float64Array(nl);
+  const dx = new Float64Array(nl);
+  const dy = new Float64Array(nl);
+  const b = new Float64Array(m);
+  let loadScale = 0;
+  for (let i = 0; i < nl; i++) {
+    const l = t.loads[i]!;
+    if (l.kind === 'couple') {
+      const mom = l.moment(env);
+      if (!Number.isFinite(mom)) throw new EngineError({ kind: 'expression', path: ['loads', i, 'moment'], message: `load ${l.id}: the moment is not a finite number` });
+      kfx[i] = mom;
+      loadScale = Math.max(loadScale, Math.abs(mom) * invL);
+      if (l.part >= 0) b[3 * l.part + 2] = b[3 * l.part + 2]! - mom * invL;
+      continue;
+    }
+    if (l.unknown) {
+      const [a, c] = unitDirection(l.unknown.direction, env, `load ${l.id}`, ['loads', i, 'force', 'direction']);
+      dx[i] = a;
+      dy[i] = c;
+      ux[l.unknown.column] = a;
+      uy[l.unknown.column] = c;
+      continue;
+    }
+    const k = l.known!;
+    let fx: number;
+    let fy: number;
+    if ('x' in k) {
+      fx = k.x(env);
+      fy = k.y(env);
+    } else {
+      const mag = k.magnitude(env);
+      const [a, c] = unitDirection(k.direction, env, `load ${l.id}`, ['loads', i, 'force', 'direction']);
+      fx = mag * a;
+      fy = mag * c;
+    }
+    if (!Number.isFinite(fx) || !Number.isFinite(fy)) {
+      throw new EngineError({ kind: 'expression', path: ['loads', i, 'force'], message: `load ${l.id}: the force is not a finite number` });
+    }
+    kfx[i] = fx;
+    kfy[i] = fy;
+    loadScale = Math.max(loadScale, Math.hypot(fx, fy));
+    if (l.part >= 0) {
+      const r = 3 * l.part;
+      b[r] = b[r]! - fx;
+      b[r + 1] = b[r + 1]! - fy;
+      b[r + 2] = b[r + 2]! - ((px[l.point]! - rx[l.part]!) * fy - (py[l.point]! - ry[l.part]!) * fx) * invL;
+    }
+  }
+  t.columns.forEach((c, k) => {
+    switch (c.kind) {
+      case 'pin-x':
+        ux[k] = 1;
+        uy[k] = 0;
+        break;
+      case 'pin-y':
+        ux[k] = 0;
+        uy[k] = 1;
+        break;
+      case 'normal':
+        ux[k] = nx[c.joint]!;
+        uy[k] = ny[c.joint]!;
+        break;
+      case 'tangent': // the normal turned 90° anticlockwise
+        ux[k] = -ny[c.joint]!;
+        uy[k] = nx[c.joint]!;
+        break;
+      case 'slip':
+        ux[k] = nx[c.joint]! - mu[c.joint]! * ny[c.joint]!;
+        uy[k] = ny[c.joint]! + mu[c.joint]! * nx[c.joint]!;
+        break;
+      default:
+        break;
+    }
+  });
+
+  const a = new Float64Array(m * n);
+  for (const ap of t.applications) {
+    if (ap.part < 0) continue;
+    const r = 3 * ap.part;
+    const fx = ap.sign * ux[ap.column]!;
+    const fy = ap.sign * uy[ap.column]!;
+    a[r * n + ap.column] = a[r * n + ap.column]! + fx;
+    a[(r + 1) * n + ap.column] = a[(r + 1) * n + ap.column]! + fy;
+    a[(r + 2) * n + ap.column] =
+      a[(r + 2) * n + ap.column]! + ((px[ap.point]! - rx[ap.part]!) * fy - (py[ap.point]! - ry[ap.part]!) * fx) * invL;
+  }
+  return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rx, ry, kfx, kfy, dx, dy };
+}
