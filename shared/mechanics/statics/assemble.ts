@@ -24,6 +24,8 @@ export interface Assembled {
   length: number;
   /** Largest known load, N (or N·mm / length for couples): the scale for residuals. */
   loadScale: number;
+  /** The part each row belongs to (a part whose forces all meet in one point has no moment row). */
+  rowPart: Int32Array;
   /** Reference point per part (the moment centre of its third row). */
   rx: Float64Array;
   ry: Float64Array;
@@ -204,5 +206,40 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
     a[(r + 2) * n + ap.column] =
       a[(r + 2) * n + ap.column]! + ((px[ap.point]! - rx[ap.part]!) * fy - (py[ap.point]! - ry[ap.part]!) * fx) * invL;
   }
-  return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rx, ry, kfx, kfy, dx, dy };
+  // A part whose forces all act at one point (a ring, a hook node, a block treated as a
+  // particle) has only two equations: its moment row is identically zero and would read as a
+  // spurious free rotation. Drop those rows; a couple on such a part still shows as imbalance.
+  const spread = new Float64Array(np);
+  const firstX = new Float64Array(np).fill(NaN);
+  const firstY = new Float64Array(np).fill(NaN);
+  const touch = (part: number, point: number) => {
+    if (part < 0) return;
+    if (Number.isNaN(firstX[part]!)) {
+      firstX[part] = px[point]!;
+      firstY[part] = py[point]!;
+    } else spread[part] = Math.max(spread[part]!, Math.hypot(px[point]! - firstX[part]!, py[point]! - firstY[part]!));
+  };
+  t.parts.forEach((p, i) => p.outline.forEach((k) => touch(i, k)));
+  for (const ap of t.applications) touch(ap.part, ap.point);
+  t.loads.forEach((l) => l.kind === 'force' && touch(l.part, l.point));
+  const keep: number[] = [];
+  for (let r = 0; r < m; r++) {
+    const part = Math.floor(r / 3);
+    const couple = t.loads.some((l) => l.kind === 'couple' && l.part === part);
+    if (r % 3 === 2 && spread[part]! <= 1e-9 * length && !couple) continue;
+    keep.push(r);
+  }
+  if (keep.length === m) {
+    const rowPart = Int32Array.from({ length: m }, (_, r) => Math.floor(r / 3));
+    return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
+  }
+  const mk = keep.length;
+  const ak = new Float64Array(mk * n);
+  const bk = new Float64Array(mk);
+  keep.forEach((r, i) => {
+    ak.set(a.subarray(r * n, (r + 1) * n), i * n);
+    bk[i] = b[r]!;
+  });
+  const rowPart = Int32Array.from(keep, (r) => Math.floor(r / 3));
+  return { m: mk, n, a: ak, b: bk, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
 }

@@ -33,7 +33,9 @@ function freeMotions(t: CompiledTemplate, s: Assembled, relTol: number): FreeMot
   const qt = pivotedQr(transpose(s.a, s.m, s.n), s.n, s.m, relTol);
   const bNorm = Math.hypot(...s.b) || 1;
   return nullSpace(qt).map((y) => {
-    const parts = t.parts.filter((_, p) => Math.hypot(y[3 * p]!, y[3 * p + 1]!, y[3 * p + 2]!) > 1e-6).map((p) => p.label);
+    const moves = new Float64Array(t.parts.length);
+    for (let r = 0; r < s.m; r++) moves[s.rowPart[r]!] = Math.max(moves[s.rowPart[r]!]!, Math.abs(y[r]!));
+    const parts = t.parts.filter((_, p) => moves[p]! > 1e-6).map((p) => p.label);
     let work = 0;
     for (let i = 0; i < s.m; i++) work += y[i]! * s.b[i]!;
     return { parts, loadsDoWork: Math.abs(work) > 1e-9 * bNorm };
