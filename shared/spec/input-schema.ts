@@ -16,15 +16,12 @@ export function inputZodSchema(spec: Pick<TemplateSpec, 'inputs'>) {
 function inputField(inp: InputDef) {
   const unit = unitOf(inp.quantity, 'SI');
   const description = [inp.help, unit ? `In ${unit}.` : ''].filter(Boolean).join(' ');
+  // zod 4 numbers refuse NaN and ±Infinity themselves; keep the bounds on the number itself
+  // (not behind a pipe) so that they reach the JSON Schema.
   const base = z
-    .number({ error: (iss) => (iss.input === undefined ? 'is required' : 'must be a number') })
-    .refine(Number.isFinite, 'must be a finite number')
-    .pipe(
-      z
-        .number()
-        .min(inp.min, `must be at least ${inp.min}${unit ? ` ${unit}` : ''}`)
-        .max(inp.max, `must be at most ${inp.max}${unit ? ` ${unit}` : ''}`),
-    );
+    .number({ error: (iss) => (iss.input === undefined ? 'is required' : 'must be a finite number') })
+    .min(inp.min, `must be at least ${inp.min}${unit ? ` ${unit}` : ''}`)
+    .max(inp.max, `must be at most ${inp.max}${unit ? ` ${unit}` : ''}`);
   const field = inp.control === 'choice' && inp.choices
     ? z.union(inp.choices.map((c) => z.literal(c.value).describe(c.label)) as unknown as [z.ZodLiteral<number>, z.ZodLiteral<number>])
     : base;

@@ -1,0 +1,12 @@
+import { z } from 'zod';
+
+export const healthSchema = z.object({
+  status: z.enum(['ok', 'degraded']),
+  version: z.string(),
+  database: z.object({
+    ok: z.boolean(),
+    driver: z.enum(['pglite', 'postgres']),
+    latencyMs: z.number().nonnegative().nullable(),
+  }),
+});
+export type Health = z.infer<typeof healthSchema>;
