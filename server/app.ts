@@ -1,0 +1,45 @@
+import express from 'express';
+import type { Logger } from 'pino';
+import type { DatabaseHandle } from './db/database';
+import { apiNotFound, problemErrorHandler } from './middleware/error-handler';
+import { requestLogging } from './middleware/request-logging';
+import { securityHeaders } from './middleware/security-headers';
+import { serveClient } from './middleware/serve-client';
+import { healthRouter } from './routes/health';
+import { appVersion } from './version';
+
+export interface AppOptions {
+  database: DatabaseHandle;
+  logger: Logger;
+  /** The built client (Vite's outDir); skipped quietly when it has no index.html. */
+  clientDir?: string | undefined;
+  /** Largest JSON body accepted, in body-parser's notation. */
+  jsonLimit?: string | number;
+  version?: string;
+  /** Express's `trust proxy` setting; off unless the operator names the proxies. */
+  trustProxy?: boolean | number | string;
+}
+
+/** Builds the whole HTTP app without listening, so tests drive it through supertest. */
+export function createApp(options: AppOptions): express.Express {
+  const { database, logger } = options;
+  const app = express();
+  app.disable('x-powered-by');
+  // Proxies are trusted only when configured to be, so req.ip cannot be spoofed by a header.
+  app.set('trust proxy', options.trustProxy ?? false);
+
+  app.use(securityHeaders());
+  app.use(requestLogging(logger));
+  app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
+
+  const api = express.Router();
+  api.use(healthRouter(database, options.version ?? appVersion));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  const client = options.clientDir ? serveClient(options.clientDir) : null;
+  if (client) app.use(client);
+
+  app.use(problemErrorHandler(logger));
+  return app;
+}

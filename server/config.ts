@@ -1,0 +1,60 @@
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import { z } from 'zod';
+
+const projectRoot = fileURLToPath(new URL('..', import.meta.url));
+
+const envSchema = z.object({
+  PORT: z.coerce.number().int().min(0).max(65535).default(3000),
+  HOST: z.string().min(1).optional(),
+  DATA_DIR: z.string().min(1).default('./data'),
+  DATABASE_URL: z
+    .string()
+    .regex(/^postgres(ql)?:\/\//, 'must be a postgres:// or postgresql:// connection string')
+    .optional(),
+  DB_SNAPSHOT: z.string().min(1).optional(),
+  CLIENT_DIR: z.string().min(1).optional(),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  TRUST_PROXY: z
+    .string()
+    .optional()
+    .transform((value) => {
+      if (value === undefined || value === '' || value === 'false') return false;
+      if (value === 'true') return true;
+      return /^\d+$/.test(value) ? Number(value) : value;
+    }),
+});
+
+export interface ServerConfig {
+  port: number;
+  host: string | undefined;
+  dataDir: string;
+  databaseUrl: string | undefined;
+  snapshotFile: string;
+  clientDir: string;
+  logLevel: string;
+  trustProxy: boolean | number | string;
+}
+
+export class ConfigError extends Error {}
+
+export function readConfig(env: NodeJS.ProcessEnv = process.env): ServerConfig {
+  // Empty variables (PORT= in a shell) mean "not set", not "invalid".
+  const present = Object.fromEntries(Object.entries(env).filter(([, value]) => value !== ''));
+  const parsed = envSchema.safeParse(present);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);
+    throw new ConfigError(`Pinwork cannot start: some settings are not valid:\n${lines.join('\n')}`);
+  }
+  const e = parsed.data;
+  return {
+    port: e.PORT,
+    host: e.HOST,
+    dataDir: e.DATA_DIR === 'memory' ? 'memory' : path.resolve(e.DATA_DIR),
+    databaseUrl: e.DATABASE_URL,
+    snapshotFile: e.DB_SNAPSHOT ? path.resolve(e.DB_SNAPSHOT) : path.join(projectRoot, 'dist/db-snapshot.tar.gz'),
+    clientDir: e.CLIENT_DIR ? path.resolve(e.CLIENT_DIR) : path.join(projectRoot, 'dist/client'),
+    logLevel: e.LOG_LEVEL,
+    trustProxy: e.TRUST_PROXY,
+  };
+}

@@ -1,0 +1,93 @@
+import { once } from 'node:events';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
+import type { Logger } from 'pino';
+import { createApp } from './app';
+import type { ServerConfig } from './config';
+import { MEMORY_DATA_DIR, openDatabase } from './db/client';
+import { lockDataFolder, type DataFolderLock } from './db/data-folder-lock';
+import type { DatabaseHandle } from './db/database';
+import { seedDemoData } from './db/seed';
+import { recordAudit } from './services/audit';
+import { appVersion } from './version';
+
+// Long enough for any real request; a client that holds a connection open longer is cut off.
+const DRAIN_TIMEOUT_MS = 10_000;
+
+export interface RunningServer {
+  url: string;
+  port: number;
+  /** Stops accepting, lets in-flight requests finish, then closes the database and the lock. */
+  stop(reason: string): Promise<void>;
+}
+
+export async function startServer(
+  config: ServerConfig,
+  logger: Logger,
+  onLockCompromised: (error: Error) => void,
+): Promise<RunningServer> {
+  const embeddedFolder = !config.databaseUrl && config.dataDir !== MEMORY_DATA_DIR;
+  // The lock comes before the database is touched, so a second start changes nothing on disk.
+  const lock: DataFolderLock | null = embeddedFolder
+    ? await lockDataFolder(config.dataDir, { onCompromised: onLockCompromised })
+    : null;
+
+  let database: DatabaseHandle | null = null;
+  try {
+    database = await openDatabase({
+      databaseUrl: config.databaseUrl,
+      dataDir: config.dataDir,
+      snapshotFile: config.snapshotFile,
+      logger,
+    });
+    const seeded = await seedDemoData(database.db);
+    logger.info({ seeded }, 'demo data checked');
+    await recordAudit(database.db, {
+      actorKind: 'system',
+      action: 'server.start',
+      details: { version: appVersion, driver: database.driver, pid: process.pid },
+    });
+
+    const app = createApp({
+      database,
+      logger,
+      clientDir: config.clientDir,
+      trustProxy: config.trustProxy,
+    });
+    const server = http.createServer(app);
+    server.listen(config.port, config.host);
+    await once(server, 'listening');
+    const port = (server.address() as AddressInfo).port;
+    const shownHost = !config.host || config.host === '0.0.0.0' || config.host === '::' ? 'localhost' : config.host;
+    const url = `http://${shownHost}:${port}`;
+
+    const openDb = database;
+    let stopping: Promise<void> | null = null;
+    const stop = (reason: string) => {
+      stopping ??= (async () => {
+        logger.info({ reason }, 'stopping: no new connections, finishing requests in flight');
+        const closed = new Promise<void>((resolve) => server.close(() => resolve()));
+        const timer = setTimeout(() => {
+          logger.warn({ ms: DRAIN_TIMEOUT_MS }, 'requests still open after the drain timeout; closing them');
+          server.closeAllConnections();
+        }, DRAIN_TIMEOUT_MS);
+        await closed;
+        clearTimeout(timer);
+        await recordAudit(openDb.db, {
+          actorKind: 'system',
+          action: 'server.stop',
+          details: { version: appVersion, reason, pid: process.pid },
+        }).catch((error: unknown) => logger.error({ err: error }, 'could not record the stop'));
+        await openDb.close();
+        await lock?.release();
+        logger.info('stopped cleanly');
+      })();
+      return stopping;
+    };
+    return { url, port, stop };
+  } catch (error) {
+    await database?.close().catch(() => undefined);
+    await lock?.release().catch(() => undefined);
+    throw error;
+  }
+}
