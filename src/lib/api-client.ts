@@ -1,72 +1,40 @@
+import {
+  fieldErrorsFromZodIssues,
+  PROBLEM_CONTENT_TYPE,
+  problemSchema,
+  type Problem,
+  type ProblemFieldError,
+} from '../../shared/api/problem';
 import type { z } from './zod';
 
-/** One failing input, as the API names it: a path into the request and a reason. */
-export interface FieldProblem {
-  path: string;
-  message: string;
-}
-
-/** RFC 9457 problem details, with the extension members Pinwork's API uses. */
-export interface ProblemDetails {
-  type: string;
-  title: string;
-  status: number;
-  detail?: string;
-  instance?: string;
-  errors: FieldProblem[];
-  [extension: string]: unknown;
-}
+/** RFC 9457 problem details as the client holds them: `errors` always present. */
+export type ProblemDetails = Problem & { errors: ProblemFieldError[] };
 
 /** Every failed API call surfaces as this error, whatever the server sent. */
 export class ApiError extends Error {
   readonly status: number;
   readonly problem: ProblemDetails;
+  /** The response body as received, for callers that expect a non-problem error body. */
+  readonly body: unknown;
 
-  constructor(problem: ProblemDetails) {
+  constructor(problem: ProblemDetails, body: unknown = undefined) {
     super(problem.detail ? `${problem.title}: ${problem.detail}` : problem.title);
     this.name = 'ApiError';
     this.status = problem.status;
     this.problem = problem;
+    this.body = body;
   }
 
-  /** The message for one input, so a form can show it beside that field. */
-  messageFor(path: string): string | undefined {
-    return this.problem.errors.find((e) => e.path === path)?.message;
+  /** The message for one input, by its JSON Pointer (`/inputs/0/min`), to show beside that field. */
+  messageFor(pointer: string): string | undefined {
+    return this.problem.errors.find((e) => e.path === pointer)?.message;
   }
-}
-
-function isRecord(value: unknown): value is Record<string, unknown> {
-  return typeof value === 'object' && value !== null && !Array.isArray(value);
-}
-
-function pathToString(path: unknown): string {
-  if (Array.isArray(path)) return path.map(String).join('.');
-  if (typeof path === 'string') return path.replace(/^\//, '').replaceAll('/', '.');
-  return '';
-}
-
-function readFieldProblems(body: Record<string, unknown>): FieldProblem[] {
-  const list = body.errors ?? body.issues ?? body['invalid-params'] ?? body.invalidParams;
-  if (!Array.isArray(list)) return [];
-  return list.filter(isRecord).map((item) => ({
-    path: pathToString(item.path ?? item.pointer ?? item.name ?? item.field),
-    message: String(item.message ?? item.reason ?? item.detail ?? 'is not valid'),
-  }));
 }
 
 /** Turn any error response into problem details; a body that is not one is described honestly. */
 export function toProblemDetails(status: number, statusText: string, body: unknown): ProblemDetails {
-  if (isRecord(body) && typeof body.title === 'string') {
-    return {
-      ...body,
-      type: typeof body.type === 'string' ? body.type : 'about:blank',
-      title: body.title,
-      status: typeof body.status === 'number' ? body.status : status,
-      detail: typeof body.detail === 'string' ? body.detail : undefined,
-      instance: typeof body.instance === 'string' ? body.instance : undefined,
-      errors: readFieldProblems(body),
-    };
-  }
+  const parsed = problemSchema.safeParse(body);
+  if (parsed.success) return { ...parsed.data, errors: parsed.data.errors ?? [] };
   return {
     type: 'about:blank',
     title: statusText || `HTTP ${status}`,
@@ -88,7 +56,7 @@ async function readBody(response: Response): Promise<unknown> {
   const text = await response.text();
   if (!text) return undefined;
   const type = response.headers.get('content-type') ?? '';
-  if (type.includes('json')) {
+  if (type.includes('application/json') || type.includes(PROBLEM_CONTENT_TYPE)) {
     try {
       return JSON.parse(text);
     } catch {
@@ -124,7 +92,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions<T> = {
   }
 
   const data = await readBody(response);
-  if (!response.ok) throw new ApiError(toProblemDetails(response.status, response.statusText, data));
+  if (!response.ok) throw new ApiError(toProblemDetails(response.status, response.statusText, data), data);
   if (!schema) return data as T;
 
   const parsed = schema.safeParse(data);
@@ -134,10 +102,7 @@ export async function apiRequest<T>(path: string, options: RequestOptions<T> = {
       title: 'Unexpected response',
       status: response.status,
       detail: `The server's answer to ${method} ${path} does not have the expected shape.`,
-      errors: parsed.error.issues.map((issue) => ({
-        path: issue.path.map(String).join('.'),
-        message: issue.message,
-      })),
+      errors: fieldErrorsFromZodIssues(parsed.error.issues),
     });
   }
   return parsed.data;

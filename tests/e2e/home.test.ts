@@ -5,7 +5,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { launchBrowser, type TestBrowser } from './support/browser';
 import { watchContext, type PageProblems } from './support/page-watch';
-import { artifactsDir } from './support/paths';
+import { artifactsDir, repoRoot } from './support/paths';
 import { startBuiltServer, type RunningServer } from './support/server';
 
 let server: RunningServer;
@@ -48,7 +48,9 @@ describe('the built app served by the Pinwork server', () => {
     const serverStatus = page.getByTestId('health-server');
     await serverStatus.waitFor();
     expect(await serverStatus.textContent()).toBe('ok');
-    expect(await page.getByTestId('health-database').textContent()).toMatch(/^ok\b/);
+    expect(await page.getByTestId('health-database').textContent()).toBe('ok');
+    const version = JSON.parse(readFileSync(join(repoRoot, 'package.json'), 'utf8')).version;
+    expect(await page.getByTestId('health-version').textContent()).toBe(version);
 
     // The font ships with the app: Manrope must have been loaded from our own origin.
     expect(await page.evaluate(() => document.fonts.check('16px Manrope'))).toBe(true);
@@ -144,6 +146,26 @@ describe('the built app served by the Pinwork server', () => {
     await serverStatus.waitFor({ timeout: 20_000 });
     expect(await serverStatus.textContent()).toBe('unreachable');
     expect(await page.getByText('Database unavailable: The database did not answer.').isVisible()).toBe(true);
+  });
+
+  it('says which part is degraded when the server reports its database not answering', async () => {
+    await page.route('**/api/health', (route) =>
+      route.fulfill({
+        status: 503,
+        contentType: 'application/json',
+        body: JSON.stringify({
+          status: 'degraded',
+          version: '9.9.9',
+          database: { ok: false, driver: 'postgres', latencyMs: null },
+        }),
+      }),
+    );
+    await page.goto(server.url);
+    const serverStatus = page.getByTestId('health-server');
+    await serverStatus.waitFor();
+    expect(await serverStatus.textContent()).toBe('degraded');
+    expect(await page.getByTestId('health-database').textContent()).toBe('not answering');
+    expect(await page.getByTestId('health-version').textContent()).toBe('9.9.9');
   });
 
   it('has no serious accessibility violations on the home page (axe-core)', async () => {

@@ -1,24 +1,23 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from '../../../lib/zod';
-import { apiRequest } from '../../../lib/api-client';
+import { healthSchema, type Health } from '../../../../shared/api/health';
+import { ApiError, apiRequest } from '../../../lib/api-client';
 
-// The server reports the database either as a plain word or as an object with a
-// status; both are accepted so the home page reads either shape.
-const databaseState = z.union([
-  z.string(),
-  z.looseObject({ status: z.string(), kind: z.string().optional(), driver: z.string().optional() }),
-]);
+export type { Health };
 
-export const healthSchema = z.looseObject({
-  status: z.string(),
-  version: z.string().optional(),
-  database: databaseState.optional(),
-});
-
-export type Health = z.infer<typeof healthSchema>;
-
-export function getHealth(signal?: AbortSignal): Promise<Health> {
-  return apiRequest('/api/health', { schema: healthSchema, signal });
+/**
+ * The server's health. A 503 whose body is a health report (the database not answering)
+ * is an answer, not a failure: it is returned so the page can say what is degraded.
+ */
+export async function getHealth(signal?: AbortSignal): Promise<Health> {
+  try {
+    return await apiRequest('/api/health', { schema: healthSchema, signal });
+  } catch (error) {
+    if (error instanceof ApiError && error.status === 503) {
+      const report = healthSchema.safeParse(error.body);
+      if (report.success) return report.data;
+    }
+    throw error;
+  }
 }
 
 export function healthQueryOptions() {
@@ -31,16 +30,4 @@ export function healthQueryOptions() {
 
 export function useHealth() {
   return useQuery(healthQueryOptions());
-}
-
-export function databaseStatus(health: Health): string | undefined {
-  const db = health.database;
-  if (db === undefined) return undefined;
-  return typeof db === 'string' ? db : db.status;
-}
-
-export function databaseKind(health: Health): string | undefined {
-  const db = health.database;
-  if (db === undefined || typeof db === 'string') return undefined;
-  return db.kind ?? db.driver;
 }

@@ -1,15 +1,18 @@
 import { ApiError } from '../../../lib/api-client';
-import { databaseKind, databaseStatus, useHealth } from '../api/get-health';
+import { useHealth } from '../api/get-health';
 
 function StatusDot({ tone }: { tone: 'ok' | 'bad' | 'wait' }) {
   const colour = tone === 'ok' ? 'bg-verdict-pass' : tone === 'bad' ? 'bg-verdict-fail' : 'bg-ink-300';
   return <span aria-hidden="true" className={`inline-block size-2.5 shrink-0 rounded-full ${colour}`} />;
 }
 
-function Row({ label, value, tone }: { label: string; value: string; tone: 'ok' | 'bad' | 'wait' }) {
+function Row({ label, value, note, tone }: { label: string; value: string; note?: string; tone: 'ok' | 'bad' | 'wait' }) {
   return (
     <div className="flex items-center justify-between gap-4 py-2">
-      <dt className="text-sm text-ink-700">{label}</dt>
+      <dt className="text-sm text-ink-700">
+        {label}
+        {note && <span className="block text-xs text-ink-600">{note}</span>}
+      </dt>
       <dd className="flex items-center gap-2 text-sm font-semibold text-ink-950">
         <StatusDot tone={tone} />
         <span data-testid={`health-${label.toLowerCase()}`}>{value}</span>
@@ -35,16 +38,18 @@ export function HealthPanel() {
     );
   } else {
     const data = health.data;
-    const db = databaseStatus(data);
-    const kind = databaseKind(data);
-    const ok = (value: string | undefined) => (value === 'ok' ? 'ok' : 'bad');
+    const db = data.database;
+    const latency = db.latencyMs === null ? undefined : `answered in ${db.latencyMs.toFixed(1)} ms`;
     body = (
       <dl className="divide-y divide-ink-100">
-        <Row label="Server" value={data.status} tone={ok(data.status)} />
-        {db !== undefined && (
-          <Row label="Database" value={kind ? `${db} · ${kind}` : db} tone={ok(db)} />
-        )}
-        {data.version !== undefined && <Row label="Version" value={data.version} tone="wait" />}
+        <Row label="Server" value={data.status} tone={data.status === 'ok' ? 'ok' : 'bad'} />
+        <Row
+          label="Database"
+          value={db.ok ? 'ok' : 'not answering'}
+          note={[db.driver === 'pglite' ? 'embedded PGlite' : 'PostgreSQL', latency].filter(Boolean).join(' · ')}
+          tone={db.ok ? 'ok' : 'bad'}
+        />
+        <Row label="Version" value={data.version} tone="wait" />
       </dl>
     );
   }
