@@ -6,6 +6,7 @@ import { CONSTANTS, FUNCTIONS } from './expressions/functions';
 import { ExpressionError } from './expressions/parse';
 import type { PointOp } from './geometry';
 import type { SolveEnv } from './solve-env';
+import { len } from './vec';
 
 /** A direction evaluated per solve: an angle expression, or from one point towards another. */
 export type DirectionPlan = { angle: Evaluator<SolveEnv> } | { from: number; to: number };
@@ -34,6 +35,8 @@ export interface JointPlan {
   normal?: DirectionPlan;
   friction: 'none' | 'required' | { coefficient: Evaluator<SolveEnv>; sense: 1 | -1 };
   columns: number[];
+  /** How the force reads in each part's free body: "pin B (from Link B–C)". */
+  sideLabels: [string, string];
 }
 
 export interface MemberPlan {
@@ -97,6 +100,10 @@ export interface CompiledTemplate {
   drive?: { input: number; effort: number; output: number };
   /** True when a contact carries friction at slipping: virtual work does not apply then. */
   dissipative: boolean;
+  /** Matrix row of each part equation (3 per part: ΣFx, ΣFy, ΣM), −1 where dropped. */
+  rowOf: Int32Array;
+  /** The part of each matrix row. */
+  rowPart: Int32Array;
 }
 
 const DIRECTION_ACCESSORS = new Set(['x', 'y', 'dist', 'dir']);
@@ -176,7 +183,7 @@ export function compileTemplate(spec: TemplateSpec): CompiledTemplate {
     const [a, b] = idx as number[];
     if (fn === 'x') return (env) => env.px[a!]!;
     if (fn === 'y') return (env) => env.py[a!]!;
-    if (fn === 'dist') return (env) => Math.hypot(env.px[b!]! - env.px[a!]!, env.py[b!]! - env.py[a!]!);
+    if (fn === 'dist') return (env) => len(env.px[b!]! - env.px[a!]!, env.py[b!]! - env.py[a!]!);
     return (env) => (Math.atan2(env.py[b!]! - env.py[a!]!, env.px[b!]! - env.px[a!]!) * 180) / Math.PI;
   };
   const jointIndex = new Map(spec.joints.map((j, i) => [j.id, i]));
@@ -203,7 +210,7 @@ export function compileTemplate(spec: TemplateSpec): CompiledTemplate {
         if (typeof i === 'string') return i;
         if (fn === 'jointX') return (env) => env.jfx[i]!;
         if (fn === 'jointY') return (env) => env.jfy[i]!;
-        if (fn === 'joint') return (env) => Math.hypot(env.jfx[i]!, env.jfy[i]!);
+        if (fn === 'joint') return (env) => len(env.jfx[i]!, env.jfy[i]!);
         const j = spec.joints[i]!;
         if (j.kind === 'pin') return `${fn}('${args[0]}'): '${args[0]}' is a pin; normal and friction forces belong to contacts and rollers`;
         if (fn === 'normal') return (env) => env.jn[i]!;
@@ -377,7 +384,9 @@ export function compileTemplate(spec: TemplateSpec): CompiledTemplate {
       applications.push({ column: c, part: pa, point, sign: 1 });
       applications.push({ column: c, part: pb, point, sign: -1 });
     }
-    return { id: j.id, label: name, kind: j.kind, point, parts: [pa, pb], partIds: j.between, ...(normal ? { normal } : {}), friction, columns: cols };
+    const partLabel = (id: string) => (id === 'ground' ? 'ground' : (spec.parts.find((q) => q.id === id)?.label ?? id));
+    const sideLabels: [string, string] = [`${name} (from ${partLabel(j.between[1])})`, `${name} (from ${partLabel(j.between[0])})`];
+    return { id: j.id, label: name, kind: j.kind, point, parts: [pa, pb], partIds: j.between, ...(normal ? { normal } : {}), friction, columns: cols, sideLabels };
   });
 
   const members: MemberPlan[] = spec.members.map((m, i) => {
@@ -456,8 +465,26 @@ export function compileTemplate(spec: TemplateSpec): CompiledTemplate {
     d.between.forEach((p, k) => pointAt(p, ['dimensions', i, 'between', k]));
   });
 
+  // A part whose forces all act at one named point (a ring, a hook node, a block taken as a
+  // particle) has two equations, not three: its moment row would be identically zero and read
+  // as a spurious free rotation. A couple on it keeps the row, so the imbalance shows.
+  const touched = parts.map((p) => new Set(p.outline));
+  for (const ap of applications) if (ap.part >= 0) touched[ap.part]!.add(ap.point);
+  for (const l of loads) if (l.part >= 0 && l.kind === 'force') touched[l.part]!.add(l.point);
+  const rowOf = new Int32Array(3 * parts.length).fill(-1);
+  const rowParts: number[] = [];
+  parts.forEach((_, p) => {
+    const node = touched[p]!.size === 1 && !loads.some((l) => l.kind === 'couple' && l.part === p);
+    for (let k = 0; k < (node ? 2 : 3); k++) {
+      rowOf[3 * p + k] = rowParts.length;
+      rowParts.push(p);
+    }
+  });
+
   if (issues.length > 0) throw new SpecError(issues);
   return {
+    rowOf,
+    rowPart: Int32Array.from(rowParts),
     spec,
     inputs: spec.inputs,
     derived,

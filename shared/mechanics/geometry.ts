@@ -1,6 +1,7 @@
 import { EngineError } from './errors';
 import type { Evaluator } from './expressions/compile';
 import type { SolveEnv } from './solve-env';
+import { len } from './vec';
 
 /** One constructive step, with point names resolved to indices and parameters compiled. */
 export type PointOp =
@@ -62,7 +63,7 @@ export function buildPoints(ops: readonly PointOp[], names: readonly string[], e
         const ay = py[op.a]!;
         const dx = px[op.b]! - ax;
         const dy = py[op.b]! - ay;
-        const d = Math.hypot(dx, dy);
+        const d = len(dx, dy);
         const an = names[op.a]!;
         const bn = names[op.b]!;
         const path = ['points', name];
@@ -121,11 +122,11 @@ export function buildPoints(ops: readonly PointOp[], names: readonly string[], e
         let f: number;
         if (op.fraction) f = finite(name, 'fraction', op.fraction(env));
         else {
-          const len = Math.hypot(dx, dy);
-          if (len === 0) {
+          const span = len(dx, dy);
+          if (span === 0) {
             throw new EngineError({ kind: 'geometry', path: ['points', name], message: `${name}: ${names[op.from]} and ${names[op.to]} coincide, so no direction runs from one to the other` });
           }
-          f = finite(name, 'distance', op.distance!(env)) / len;
+          f = finite(name, 'distance', op.distance!(env)) / span;
         }
         px[op.target] = fx + f * dx;
         py[op.target] = fy + f * dy;
@@ -139,8 +140,8 @@ export function buildPoints(ops: readonly PointOp[], names: readonly string[], e
         const sx = dx - cx;
         const sy = dy - cy;
         const denom = rx * sy - ry * sx;
-        const lr = Math.hypot(rx, ry);
-        const ls = Math.hypot(sx, sy);
+        const lr = len(rx, ry);
+        const ls = len(sx, sy);
         const l1 = `${names[op.a]}–${names[op.b]}`;
         const l2 = `${names[op.c]}–${names[op.d]}`;
         if (lr === 0 || ls === 0) {

@@ -97,7 +97,7 @@ export function sweep(t: CompiledTemplate, given: Record<string, unknown>, reque
     return { key: k, label: r.label, quantity: r.quantity ?? 'ratio' };
   });
   const steps: SweepOutput['steps'] = [];
-  const values = Float64Array.from(base);
+  const values = base.slice();
   for (let s = 0; s < req.steps; s++) {
     const value = from + ((to - from) * s) / (req.steps - 1);
     values[idx] = value;
@@ -145,7 +145,7 @@ export function tornado(t: CompiledTemplate, given: Record<string, unknown>, req
     const delta = (Math.abs(x0) > 0 ? Math.abs(x0) : inp.max - inp.min) * (req.percent / 100);
     const side = (target: number) => {
       const clamped = Math.min(inp.max, Math.max(inp.min, target));
-      const moved = Float64Array.from(base);
+      const moved = base.slice();
       moved[i] = clamped;
       const v = evalAt(moved);
       const note = clamped !== target ? `stopped at the ${clamped === inp.max ? 'maximum' : 'minimum'} of ${inp.label}` : undefined;
@@ -164,8 +164,8 @@ export function tornado(t: CompiledTemplate, given: Record<string, unknown>, req
       const h = Math.max(Math.abs(x0) * 1e-5, 1e-9);
       const lo = Math.max(inp.min, x0 - h);
       const hi = Math.min(inp.max, x0 + h);
-      const a = Float64Array.from(base);
-      const b = Float64Array.from(base);
+      const a = base.slice();
+      const b = base.slice();
       a[i] = lo;
       b[i] = hi;
       const ra = evalAt(a);

@@ -8,6 +8,7 @@ import type { SolveEnv } from './solve-env';
 import { buildGeometry, newEnv, resolveInputs } from './phases';
 import type { ResultValue, SolveOutcome, SolveResult } from './solve-result';
 import { verify } from './verify';
+import { len } from './vec';
 
 const compiledCache = new WeakMap<object, CompiledTemplate>();
 
@@ -38,7 +39,7 @@ function staysSingular(t: CompiledTemplate, inputs: Float64Array): boolean {
       const env = newEnv(t);
       buildGeometry(t, moved, env);
       const s = assemble(t, env);
-      const f = luFactor(Float64Array.from(s.a), s.n);
+      const f = luFactor(s.a.slice(), s.n);
       if (f.maxPivot > 0 && f.minPivot / f.maxPivot >= SINGULAR) return false;
     } catch {
       // A neighbour that cannot be built says nothing either way; try the next.
@@ -102,24 +103,25 @@ function distribute(t: CompiledTemplate, s: Assembled, x: Float64Array, env: Sol
     } else {
       env.lfx[i] = s.kfx[i]!;
       env.lfy[i] = s.kfy[i]!;
-      env.lmag[i] = Math.hypot(s.kfx[i]!, s.kfy[i]!);
+      env.lmag[i] = len(s.kfx[i]!, s.kfy[i]!);
     }
   });
 }
 
-function finite(v: number, what: string): number {
-  if (!Number.isFinite(v)) throw new EngineError({ kind: 'numeric', message: `${what} is not a finite number (${v}); the configuration cannot be evaluated` });
-  return Object.is(v, -0) ? 0 : v;
+/** `what` and `name` are joined only on failure: building the message on every call would cost more than the solve. */
+function finite(v: number, what: string, name = ''): number {
+  if (!Number.isFinite(v)) {
+    throw new EngineError({ kind: 'numeric', message: `${what}${name} is not a finite number (${v}); the configuration cannot be evaluated` });
+  }
+  return v === 0 ? 0 : v;
 }
 
 function valueOut(key: string, label: string, quantity: ResultValue['quantity'], v: number, help?: string): ResultValue {
-  const base = { key, label, quantity, ...(help ? { help } : {}) };
-  if (Number.isFinite(v)) return { ...base, value: Object.is(v, -0) ? 0 : v };
-  return {
-    ...base,
-    value: null,
-    note: Number.isNaN(v) ? 'not defined for this configuration' : 'unbounded here (for a friction result: the contact would pull apart, so no friction can hold it)',
-  };
+  const out: ResultValue = Number.isFinite(v)
+    ? { key, label, quantity, value: v === 0 ? 0 : v }
+    : { key, label, quantity, value: null, note: Number.isNaN(v) ? 'not defined for this configuration' : 'unbounded here (for a friction result: the contact would pull apart, so no friction can hold it)' };
+  if (help) out.help = help;
+  return out;
 }
 
 /** One full solve: every point, free body, member, joint, result, check and the verification block. */
@@ -140,44 +142,49 @@ function buildResult(t: CompiledTemplate, values: Float64Array, core: CoreSolve)
   const pn = t.pointNames;
   const points: SolveResult['points'] = {};
   pn.forEach((name, i) => {
-    points[name] = { x: finite(env.px[i]!, `x of ${name}`), y: finite(env.py[i]!, `y of ${name}`) };
+    points[name] = { x: finite(env.px[i]!, 'x of ', name), y: finite(env.py[i]!, 'y of ', name) };
   });
-  const force = (source: 'joint' | 'member' | 'load', id: string, label: string, point: number, fx: number, fy: number) => ({
+  type Force = SolveResult['freeBodies'][number]['forces'][number];
+  const force = (source: Force['source'], id: string, label: string, point: number, fx: number, fy: number): Force => ({
     source,
     id,
     label,
     at: pn[point]!,
     x: env.px[point]!,
     y: env.py[point]!,
-    fx: finite(fx, `force ${label}`),
-    fy: finite(fy, `force ${label}`),
-    magnitude: Math.hypot(fx, fy),
+    fx: finite(fx, label),
+    fy: finite(fy, label),
+    magnitude: len(fx, fy),
   });
-  const freeBodies: SolveResult['freeBodies'] = t.parts.map((p, pi) => {
-    const forces: SolveResult['freeBodies'][number]['forces'] = [];
-    t.joints.forEach((j, i) => {
-      const from = (other: string) => `${j.label} (from ${other === 'ground' ? 'ground' : (t.parts.find((q) => q.id === other)?.label ?? other)})`;
-      if (j.parts[0] === pi) forces.push(force('joint', j.id, from(j.partIds[1]), j.point, env.jfx[i]!, env.jfy[i]!));
-      if (j.parts[1] === pi) forces.push(force('joint', j.id, from(j.partIds[0]), j.point, -env.jfx[i]!, -env.jfy[i]!));
-    });
-    t.members.forEach((m, i) => {
-      const col = m.column;
-      const T = env.axial[i]!;
-      if (m.parts[0] === pi) forces.push(force('member', m.id, m.label, m.ends[0], T * s.ux[col]!, T * s.uy[col]!));
-      if (m.parts[1] === pi) forces.push(force('member', m.id, m.label, m.ends[1], -T * s.ux[col]!, -T * s.uy[col]!));
-    });
-    const couples: SolveResult['freeBodies'][number]['couples'] = [];
-    t.loads.forEach((l, i) => {
-      if (l.part !== pi) return;
-      if (l.kind === 'couple') couples.push({ id: l.id, label: l.label, moment: finite(env.lmag[i]!, `moment ${l.label}`) });
-      else forces.push(force('load', l.id, l.label, l.point, env.lfx[i]!, env.lfy[i]!));
-    });
-    return { part: p.id, label: p.label, forces, couples };
-  });
+  const freeBodies: SolveResult['freeBodies'] = [];
+  for (let pi = 0; pi < t.parts.length; pi++) {
+    const p = t.parts[pi]!;
+    freeBodies.push({ part: p.id, label: p.label, forces: [], couples: [] });
+  }
+  for (let i = 0; i < t.joints.length; i++) {
+    const j = t.joints[i]!;
+    const [a, b] = j.parts;
+    if (a >= 0) freeBodies[a]!.forces.push(force('joint', j.id, j.sideLabels[0], j.point, env.jfx[i]!, env.jfy[i]!));
+    if (b >= 0) freeBodies[b]!.forces.push(force('joint', j.id, j.sideLabels[1], j.point, -env.jfx[i]!, -env.jfy[i]!));
+  }
+  for (let i = 0; i < t.members.length; i++) {
+    const m = t.members[i]!;
+    const T = env.axial[i]!;
+    const fx = T * s.ux[m.column]!;
+    const fy = T * s.uy[m.column]!;
+    if (m.parts[0] >= 0) freeBodies[m.parts[0]]!.forces.push(force('member', m.id, m.label, m.ends[0], fx, fy));
+    if (m.parts[1] >= 0) freeBodies[m.parts[1]]!.forces.push(force('member', m.id, m.label, m.ends[1], -fx, -fy));
+  }
+  for (let i = 0; i < t.loads.length; i++) {
+    const l = t.loads[i]!;
+    if (l.part < 0) continue;
+    if (l.kind === 'couple') freeBodies[l.part]!.couples.push({ id: l.id, label: l.label, moment: finite(env.lmag[i]!, l.label) });
+    else freeBodies[l.part]!.forces.push(force('load', l.id, l.label, l.point, env.lfx[i]!, env.lfy[i]!));
+  }
 
   const scale = Math.max(s.loadScale, 1e-300);
   const members: SolveResult['members'] = t.members.map((m, i) => {
-    const T = finite(env.axial[i]!, `axial force of ${m.label}`);
+    const T = finite(env.axial[i]!, 'axial force of ', m.label);
     return {
       id: m.id,
       label: m.label,
@@ -187,9 +194,9 @@ function buildResult(t: CompiledTemplate, values: Float64Array, core: CoreSolve)
     };
   });
   const joints: SolveResult['joints'] = t.joints.map((j, i) => {
-    const fx = finite(env.jfx[i]!, `force at ${j.label}`);
-    const fy = finite(env.jfy[i]!, `force at ${j.label}`);
-    const out: SolveResult['joints'][number] = { id: j.id, label: j.label, kind: j.kind, at: pn[j.point]!, between: j.partIds, fx, fy, resultant: Math.hypot(fx, fy) };
+    const fx = finite(env.jfx[i]!, 'force at ', j.label);
+    const fy = finite(env.jfy[i]!, 'force at ', j.label);
+    const out: SolveResult['joints'][number] = { id: j.id, label: j.label, kind: j.kind, at: pn[j.point]!, between: j.partIds, fx, fy, resultant: len(fx, fy) };
     if (j.kind !== 'pin') {
       out.normal = env.jn[i]!;
       out.friction = env.jt[i]!;
@@ -197,17 +204,20 @@ function buildResult(t: CompiledTemplate, values: Float64Array, core: CoreSolve)
     }
     return out;
   });
-  const loads: SolveResult['loads'] = t.loads.map((l, i) => ({
-    id: l.id,
-    label: l.label,
-    kind: l.kind,
-    on: l.partId,
-    ...(l.kind === 'force' ? { at: pn[l.point]! } : {}),
-    fx: finite(env.lfx[i]!, `load ${l.label}`),
-    fy: finite(env.lfy[i]!, `load ${l.label}`),
-    magnitude: finite(env.lmag[i]!, `load ${l.label}`),
-    solved: l.kind === 'force' && !!l.unknown,
-  }));
+  const loads: SolveResult['loads'] = t.loads.map((l, i) => {
+    const out: SolveResult['loads'][number] = {
+      id: l.id,
+      label: l.label,
+      kind: l.kind,
+      on: l.partId,
+      fx: finite(env.lfx[i]!, 'load ', l.label),
+      fy: finite(env.lfy[i]!, 'load ', l.label),
+      magnitude: finite(env.lmag[i]!, 'load ', l.label),
+      solved: l.kind === 'force' && !!l.unknown,
+    };
+    if (l.kind === 'force') out.at = pn[l.point]!;
+    return out;
+  });
 
   const results = t.results.map((r) => valueOut(r.key, r.label, r.quantity ?? 'ratio', env.v[r.slot]!, r.help));
   const checks: SolveResult['checks'] = t.checks.map((c) => {
@@ -254,12 +264,12 @@ function withLimitBehaviour(t: CompiledTemplate, info: EngineErrorInfo, given: R
   for (const frac of [-0.02, -0.01, 0.01, 0.02]) {
     const v = base[idx]! + frac * (inp.max - inp.min);
     if (v < inp.min || v > inp.max) continue;
-    const moved = Float64Array.from(base);
+    const moved = base.slice();
     moved[idx] = v;
     try {
       const { env } = solveCore(t, moved);
       let largest = 0;
-      for (let i = 0; i < env.jfx.length; i++) largest = Math.max(largest, Math.hypot(env.jfx[i]!, env.jfy[i]!));
+      for (let i = 0; i < env.jfx.length; i++) largest = Math.max(largest, len(env.jfx[i]!, env.jfy[i]!));
       for (const a of env.axial) largest = Math.max(largest, Math.abs(a));
       nearby.push({ value: v, largestForce: largest });
     } catch {

@@ -2,6 +2,7 @@ import type { CompiledTemplate } from './compile-template';
 import { buildGeometry, newEnv } from './phases';
 import type { CoreSolve } from './solve';
 import type { SolveResult } from './solve-result';
+import { len } from './vec';
 
 type FreeBodies = SolveResult['freeBodies'];
 type Verification = SolveResult['verification'];
@@ -97,7 +98,7 @@ function virtualWork(t: CompiledTemplate, inputs: Float64Array, core: CoreSolve)
   const lo = Math.max(inp.min, v0 - h);
   const hi = Math.min(inp.max, v0 + h);
   const positions = (v: number) => {
-    const moved = Float64Array.from(inputs);
+    const moved = inputs.slice();
     moved[input] = v;
     const env = newEnv(t);
     buildGeometry(t, moved, env);
@@ -117,7 +118,7 @@ function virtualWork(t: CompiledTemplate, inputs: Float64Array, core: CoreSolve)
   const partRotation = (part: number): number => {
     const outline = t.parts[part]!.outline;
     const a = outline[0]!;
-    const b = outline.find((k) => Math.hypot(core.env.px[k]! - core.env.px[a]!, core.env.py[k]! - core.env.py[a]!) > 0);
+    const b = outline.find((k) => len(core.env.px[k]! - core.env.px[a]!, core.env.py[k]! - core.env.py[a]!) > 0);
     if (b === undefined) return 0;
     const rx = core.env.px[b]! - core.env.px[a]!;
     const ry = core.env.py[b]! - core.env.py[a]!;

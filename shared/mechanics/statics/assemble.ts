@@ -1,6 +1,7 @@
 import type { CompiledTemplate, DirectionPlan } from '../compile-template';
 import { EngineError } from '../errors';
 import type { SolveEnv } from '../solve-env';
+import { len } from '../vec';
 
 /**
  * The equilibrium system A x = b of one configuration: three rows per rigid part (ΣFx, ΣFy,
@@ -45,14 +46,15 @@ export function unitDirection(d: DirectionPlan, env: SolveEnv, what: string, pat
   }
   const vx = env.px[d.to]! - env.px[d.from]!;
   const vy = env.py[d.to]! - env.py[d.from]!;
-  const l = Math.hypot(vx, vy);
+  const l = len(vx, vy);
   if (!(l > 0)) throw new EngineError({ kind: 'geometry', path, message: `${what}: the two points that give its direction coincide` });
   return [vx / l, vy / l];
 }
 
 export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
   const np = t.parts.length;
-  const m = 3 * np;
+  const { rowOf, rowPart } = t;
+  const m = rowPart.length;
   const n = t.columns.length;
   const { px, py } = env;
 
@@ -67,22 +69,23 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
   cx /= pc || 1;
   cy /= pc || 1;
   let length = 0;
-  for (let i = 0; i < pc; i++) length = Math.max(length, Math.hypot(px[i]! - cx, py[i]! - cy));
+  for (let i = 0; i < pc; i++) length = Math.max(length, len(px[i]! - cx, py[i]! - cy));
   if (!(length > 0)) length = 1;
   const invL = 1 / length;
 
   const rx = new Float64Array(np);
   const ry = new Float64Array(np);
-  t.parts.forEach((p, i) => {
+  for (let i = 0; i < np; i++) {
+    const outline = t.parts[i]!.outline;
     let sx = 0;
     let sy = 0;
-    for (const k of p.outline) {
-      sx += px[k]!;
-      sy += py[k]!;
+    for (let k = 0; k < outline.length; k++) {
+      sx += px[outline[k]!]!;
+      sy += py[outline[k]!]!;
     }
-    rx[i] = sx / p.outline.length;
-    ry[i] = sy / p.outline.length;
-  });
+    rx[i] = sx / outline.length;
+    ry[i] = sy / outline.length;
+  }
 
   const nj = t.joints.length;
   const nx = new Float64Array(nj).fill(NaN);
@@ -90,8 +93,8 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
   const mu = new Float64Array(nj);
   const ux = new Float64Array(n);
   const uy = new Float64Array(n);
-
-  t.joints.forEach((j, i) => {
+  for (let i = 0; i < nj; i++) {
+    const j = t.joints[i]!;
     if (j.normal) {
       const [a, b] = unitDirection(j.normal, env, `joint ${j.id}`, ['joints', i, 'normal']);
       nx[i] = a;
@@ -104,20 +107,20 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
       }
       mu[i] = c * j.friction.sense;
     }
-  });
-  const nm = t.members.length;
-  for (let i = 0; i < nm; i++) {
+  }
+  for (let i = 0; i < t.members.length; i++) {
     const mp = t.members[i]!;
     const [e0, e1] = mp.ends;
     const vx = px[e1]! - px[e0]!;
     const vy = py[e1]! - py[e0]!;
-    const l = Math.hypot(vx, vy);
+    const l = len(vx, vy);
     if (!(l > 1e-12 * length)) {
       throw new EngineError({ kind: 'geometry', path: ['members', i], message: `member ${mp.id}: its ends ${t.pointNames[e0]} and ${t.pointNames[e1]} coincide, so its line of action is not defined` });
     }
     ux[mp.column] = vx / l;
     uy[mp.column] = vy / l;
   }
+
   const nl = t.loads.length;
   const kfx = new Float64Array(nl);
   const kfy = new Float64Array(nl);
@@ -132,7 +135,10 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
       if (!Number.isFinite(mom)) throw new EngineError({ kind: 'expression', path: ['loads', i, 'moment'], message: `load ${l.id}: the moment is not a finite number` });
       kfx[i] = mom;
       loadScale = Math.max(loadScale, Math.abs(mom) * invL);
-      if (l.part >= 0) b[3 * l.part + 2] = b[3 * l.part + 2]! - mom * invL;
+      if (l.part >= 0) {
+        const mr = rowOf[3 * l.part + 2]!;
+        b[mr] = b[mr]! - mom * invL;
+      }
       continue;
     }
     if (l.unknown) {
@@ -160,15 +166,21 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
     }
     kfx[i] = fx;
     kfy[i] = fy;
-    loadScale = Math.max(loadScale, Math.hypot(fx, fy));
+    loadScale = Math.max(loadScale, len(fx, fy));
     if (l.part >= 0) {
-      const r = 3 * l.part;
-      b[r] = b[r]! - fx;
-      b[r + 1] = b[r + 1]! - fy;
-      b[r + 2] = b[r + 2]! - ((px[l.point]! - rx[l.part]!) * fy - (py[l.point]! - ry[l.part]!) * fx) * invL;
+      const p = l.part;
+      const r0 = rowOf[3 * p]!;
+      const r1 = rowOf[3 * p + 1]!;
+      b[r0] = b[r0]! - fx;
+      b[r1] = b[r1]! - fy;
+      const mr = rowOf[3 * p + 2]!;
+      if (mr >= 0) b[mr] = b[mr]! - ((px[l.point]! - rx[p]!) * fy - (py[l.point]! - ry[p]!) * fx) * invL;
     }
   }
-  t.columns.forEach((c, k) => {
+
+  const columns = t.columns;
+  for (let k = 0; k < n; k++) {
+    const c = columns[k]!;
     switch (c.kind) {
       case 'pin-x':
         ux[k] = 1;
@@ -193,53 +205,26 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
       default:
         break;
     }
-  });
+  }
 
   const a = new Float64Array(m * n);
-  for (const ap of t.applications) {
-    if (ap.part < 0) continue;
-    const r = 3 * ap.part;
-    const fx = ap.sign * ux[ap.column]!;
-    const fy = ap.sign * uy[ap.column]!;
-    a[r * n + ap.column] = a[r * n + ap.column]! + fx;
-    a[(r + 1) * n + ap.column] = a[(r + 1) * n + ap.column]! + fy;
-    a[(r + 2) * n + ap.column] =
-      a[(r + 2) * n + ap.column]! + ((px[ap.point]! - rx[ap.part]!) * fy - (py[ap.point]! - ry[ap.part]!) * fx) * invL;
+  const apps = t.applications;
+  for (let q = 0; q < apps.length; q++) {
+    const ap = apps[q]!;
+    const p = ap.part;
+    if (p < 0) continue;
+    const col = ap.column;
+    const fx = ap.sign * ux[col]!;
+    const fy = ap.sign * uy[col]!;
+    const i0 = rowOf[3 * p]! * n + col;
+    const i1 = rowOf[3 * p + 1]! * n + col;
+    a[i0] = a[i0]! + fx;
+    a[i1] = a[i1]! + fy;
+    const mr = rowOf[3 * p + 2]!;
+    if (mr >= 0) {
+      const i2 = mr * n + col;
+      a[i2] = a[i2]! + ((px[ap.point]! - rx[p]!) * fy - (py[ap.point]! - ry[p]!) * fx) * invL;
+    }
   }
-  // A part whose forces all act at one point (a ring, a hook node, a block treated as a
-  // particle) has only two equations: its moment row is identically zero and would read as a
-  // spurious free rotation. Drop those rows; a couple on such a part still shows as imbalance.
-  const spread = new Float64Array(np);
-  const firstX = new Float64Array(np).fill(NaN);
-  const firstY = new Float64Array(np).fill(NaN);
-  const touch = (part: number, point: number) => {
-    if (part < 0) return;
-    if (Number.isNaN(firstX[part]!)) {
-      firstX[part] = px[point]!;
-      firstY[part] = py[point]!;
-    } else spread[part] = Math.max(spread[part]!, Math.hypot(px[point]! - firstX[part]!, py[point]! - firstY[part]!));
-  };
-  t.parts.forEach((p, i) => p.outline.forEach((k) => touch(i, k)));
-  for (const ap of t.applications) touch(ap.part, ap.point);
-  t.loads.forEach((l) => l.kind === 'force' && touch(l.part, l.point));
-  const keep: number[] = [];
-  for (let r = 0; r < m; r++) {
-    const part = Math.floor(r / 3);
-    const couple = t.loads.some((l) => l.kind === 'couple' && l.part === part);
-    if (r % 3 === 2 && spread[part]! <= 1e-9 * length && !couple) continue;
-    keep.push(r);
-  }
-  if (keep.length === m) {
-    const rowPart = Int32Array.from({ length: m }, (_, r) => Math.floor(r / 3));
-    return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
-  }
-  const mk = keep.length;
-  const ak = new Float64Array(mk * n);
-  const bk = new Float64Array(mk);
-  keep.forEach((r, i) => {
-    ak.set(a.subarray(r * n, (r + 1) * n), i * n);
-    bk[i] = b[r]!;
-  });
-  const rowPart = Int32Array.from(keep, (r) => Math.floor(r / 3));
-  return { m: mk, n, a: ak, b: bk, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
+  return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
 }

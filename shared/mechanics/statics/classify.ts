@@ -59,7 +59,7 @@ export function solveEquilibrium(t: CompiledTemplate, s: Assembled, structurally
   const { m, n } = s;
   const warnings: string[] = [];
   if (m === n && n > 0) {
-    const f = luFactor(Float64Array.from(s.a), n);
+    const f = luFactor(s.a.slice(), n);
     const rcond = f.maxPivot > 0 ? f.minPivot / f.maxPivot : 0;
     if (rcond >= DEAD_CENTRE) {
       if (rcond < CLOSE) {

@@ -1,0 +1,16 @@
+import { benchEngine } from './engine';
+
+/** `npm run bench`: prints each section's table. Goals are reported, never asserted by tests. */
+function table(rows: string[][]): string {
+  const widths = rows[0]!.map((_, c) => Math.max(...rows.map((r) => (r[c] ?? '').length)));
+  return rows.map((r, i) => {
+    const line = r.map((cell, c) => cell.padEnd(widths[c]!)).join('  ');
+    return i === 0 ? `${line}\n${widths.map((w) => '-'.repeat(w)).join('  ')}` : line;
+  }).join('\n');
+}
+
+console.log(`Pinwork benchmark — Node ${process.version}, ${new Date().toISOString()}\n`);
+console.log('Engine\n');
+const engine = benchEngine();
+console.log(table(engine.rows));
+console.log(`\nEngine goals: ${engine.pass ? 'all met' : 'some missed'}`);
