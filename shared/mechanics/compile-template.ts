@@ -15,7 +15,7 @@ export type DirectionPlan = { angle: Evaluator<SolveEnv> } | { from: number; to:
 export type Column =
   | { kind: 'pin-x' | 'pin-y' | 'normal' | 'tangent' | 'slip'; joint: number; label: string }
   | { kind: 'member'; member: number; label: string }
-  | { kind: 'load'; load: number; label: string };
+  | { kind: 'load' | 'couple'; load: number; label: string };
 
 /** Where a column's unit force acts: on which part (−1 for ground), at which point, with what sign. */
 export interface Application {
@@ -60,7 +60,16 @@ export type LoadPlan =
       /** For a load of unknown magnitude: its direction and its matrix column. */
       unknown?: { direction: DirectionPlan; column: number };
     }
-  | { id: string; label: string; kind: 'couple'; part: number; partId: string; moment: Evaluator<SolveEnv> };
+  | {
+      id: string;
+      label: string;
+      kind: 'couple';
+      part: number;
+      partId: string;
+      /** A known moment, or the matrix column of a couple the solve finds. */
+      moment?: Evaluator<SolveEnv>;
+      unknownColumn?: number;
+    };
 
 export interface ValuePlan {
   key: string;
@@ -405,6 +414,11 @@ export function compileTemplate(spec: TemplateSpec): CompiledTemplate {
     const path = ['loads', i];
     const part = partAt(l.on, [...path, 'on']);
     if (l.kind === 'couple') {
+      if (typeof l.moment === 'object') {
+        if (part < 0) issue([...path, 'on'], 'a couple of unknown moment must act on a part, not on ground');
+        const column = addColumn({ kind: 'couple', load: i, label: l.label });
+        return { id: l.id, label: l.label, kind: 'couple', part, partId: l.on, unknownColumn: column };
+      }
       return { id: l.id, label: l.label, kind: 'couple', part, partId: l.on, moment: ev(l.moment, geometryScope, [...path, 'moment']) };
     }
     const point = pointAt(l.at, [...path, 'at']);
@@ -455,9 +469,6 @@ export function compileTemplate(spec: TemplateSpec): CompiledTemplate {
     if (input < 0) issue(['drive', 'input'], `'${spec.drive.input}' is not an input`);
     if (effort < 0) issue(['drive', 'effort'], `'${spec.drive.effort}' is not a load`);
     if (output < 0) issue(['drive', 'output'], `'${spec.drive.output}' is not a load`);
-    for (const [k, li] of [['effort', effort], ['output', output]] as const) {
-      if (li >= 0 && spec.loads[li]!.kind === 'couple') issue(['drive', k], 'the drive check needs a force, not a couple');
-    }
     if (input >= 0 && effort >= 0 && output >= 0) drive = { input, effort, output };
   }
   spec.dimensions.forEach((d, i) => {

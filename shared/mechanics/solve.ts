@@ -92,7 +92,7 @@ function distribute(t: CompiledTemplate, s: Assembled, x: Float64Array, env: Sol
   });
   t.loads.forEach((l, i) => {
     if (l.kind === 'couple') {
-      env.lmag[i] = s.kfx[i]!;
+      env.lmag[i] = l.unknownColumn !== undefined ? x[l.unknownColumn]! : s.kfx[i]!;
       env.lfx[i] = 0;
       env.lfy[i] = 0;
     } else if (l.unknown) {
@@ -213,7 +213,7 @@ function buildResult(t: CompiledTemplate, values: Float64Array, core: CoreSolve)
       fx: finite(env.lfx[i]!, 'load ', l.label),
       fy: finite(env.lfy[i]!, 'load ', l.label),
       magnitude: finite(env.lmag[i]!, 'load ', l.label),
-      solved: l.kind === 'force' && !!l.unknown,
+      solved: l.kind === 'force' ? !!l.unknown : l.unknownColumn !== undefined,
     };
     if (l.kind === 'force') out.at = pn[l.point]!;
     return out;

@@ -133,22 +133,21 @@ function virtualWork(t: CompiledTemplate, inputs: Float64Array, core: CoreSolve)
   };
   const dirRate = (i: number): number => {
     const l = t.loads[i]!;
-    if (l.kind === 'couple' || l.part < 0) return 0;
+    if (l.part < 0) return 0;
     const m = env.lmag[i]!;
     return m !== 0 ? rate(i) / m : 0;
   };
   const magnitude = (i: number) => Math.abs(env.lmag[i]!);
   const fromEquilibrium = magnitude(output) / (magnitude(effort) || Number.MIN_VALUE);
-  const unknownLoads = t.loads.map((l, i) => (l.kind === 'force' && l.unknown ? i : -1)).filter((i) => i >= 0);
+  const unknownLoads = t.loads.map((l, i) => ((l.kind === 'force' && l.unknown) || (l.kind === 'couple' && l.unknownColumn !== undefined) ? i : -1)).filter((i) => i >= 0);
 
   let fromVirtualWork: number;
   if (unknownLoads.length === 1 && (unknownLoads[0] === output || unknownLoads[0] === effort)) {
     const u = unknownLoads[0]!;
     const ul = t.loads[u]!;
-    if (ul.kind !== 'force' || !ul.unknown) return { result: null };
-    const dirx = core.system.dx[u]!;
-    const diry = core.system.dy[u]!;
-    const along = dirx * drx(ul.point) + diry * dry(ul.point);
+    // Work per unit magnitude of the unknown load: its direction along its point's motion, or
+    // for a couple its part's rotation.
+    const along = ul.kind === 'couple' ? partRotation(ul.part) : core.system.dx[u]! * drx(ul.point) + core.system.dy[u]! * dry(ul.point);
     let others = 0;
     t.loads.forEach((_, i) => {
       if (i !== u) others += rate(i);

@@ -163,8 +163,8 @@ export const loadSchema = z.union([
       label: z.string().min(1).max(80),
       kind: z.literal('couple'),
       on: partRef,
-      /** Anticlockwise positive, N·mm. */
-      moment: numberOrExpr,
+      /** Anticlockwise positive, N·mm; { unknown: true } for a couple the solve finds (an output torque). */
+      moment: z.union([numberOrExpr, z.object({ unknown: z.literal(true) }).strict()]),
     })
     .strict(),
 ]);

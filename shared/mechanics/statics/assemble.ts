@@ -131,6 +131,7 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
   for (let i = 0; i < nl; i++) {
     const l = t.loads[i]!;
     if (l.kind === 'couple') {
+      if (!l.moment) continue; // unknown: a column of its own, filled below
       const mom = l.moment(env);
       if (!Number.isFinite(mom)) throw new EngineError({ kind: 'expression', path: ['loads', i, 'moment'], message: `load ${l.id}: the moment is not a finite number` });
       kfx[i] = mom;
@@ -225,6 +226,12 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
       const i2 = mr * n + col;
       a[i2] = a[i2]! + ((px[ap.point]! - rx[p]!) * fy - (py[ap.point]! - ry[p]!) * fx) * invL;
     }
+  }
+  for (let i = 0; i < nl; i++) {
+    const l = t.loads[i]!;
+    if (l.kind !== 'couple' || l.unknownColumn === undefined) continue;
+    const mr = rowOf[3 * l.part + 2]!;
+    a[mr * n + l.unknownColumn] = invL;
   }
   return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
 }
