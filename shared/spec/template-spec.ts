@@ -240,3 +240,5 @@ export type MemberDef = z.infer<typeof memberSchema>;
 export type Direction = z.infer<typeof direction>;
 export type NumberOrExpr = z.infer<typeof numberOrExpr>;
 export type ReferenceCase = z.infer<typeof referenceSchema>;
+/** An input as an author writes it (help and control may be left out). */
+export type AuthoredInput = z.input<typeof inputSchema>;

@@ -1,0 +1,8 @@
+import type { TemplateSpecInput } from '../shared/spec/template-spec';
+import { wallJibTieRod } from './wall-jib-tie-rod/spec';
+
+/**
+ * The built-in templates, in the order the library shows them. Seeding stores each as a
+ * published version; a changed spec here becomes a new version, never an overwrite.
+ */
+export const builtInTemplates: TemplateSpecInput[] = [wallJibTieRod];
