@@ -1,4 +1,4 @@
-import { existsSync } from 'node:fs';
+import { existsSync, mkdirSync } from 'node:fs';
 import { readFile, rm, writeFile } from 'node:fs/promises';
 import path from 'node:path';
 import { PGlite } from '@electric-sql/pglite';
@@ -33,6 +33,7 @@ export async function openPglite(options: OpenPgliteOptions): Promise<DatabaseHa
   if (folder === null || !existsSync(folder)) {
     const snapshot = options.snapshot ?? (await readSnapshot(options.snapshotFile, logger));
     const started = Date.now();
+    if (folder !== null) mkdirSync(path.dirname(folder), { recursive: true });
     client = snapshot
       ? new PGlite(folder ?? undefined, { loadDataDir: snapshot })
       : new PGlite(folder ?? undefined);

@@ -20,5 +20,7 @@ export function securityHeaders() {
     // useDefaults off: helmet's defaults would add upgrade-insecure-requests, which breaks
     // plain-http installs on a LAN address.
     contentSecurityPolicy: { useDefaults: false, directives: contentSecurityPolicy },
+    // The legacy header must agree with frame-ancestors 'none' for browsers that only read it.
+    xFrameOptions: { action: 'deny' },
   });
 }
