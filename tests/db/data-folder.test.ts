@@ -9,11 +9,11 @@ import { demoOrganisations } from '../../server/db/demo-data';
 import { makeTempDir } from '../helpers/server-process';
 import { pgliteSnapshotFile } from '../helpers/test-database';
 
-// These are about PGlite's folder, so they run on PGlite whatever DATABASE_URL says.
+// About PGlite's folder only, so the run against PostgreSQL (DATABASE_URL) skips it.
 const temp = makeTempDir('folder');
 afterAll(() => temp.remove());
 
-describe('the embedded database folder', () => {
+describe.skipIf(Boolean(process.env.DATABASE_URL))('the embedded database folder', () => {
   it('starts a new folder from the snapshot, migrated, and keeps its rows across a reopen', async () => {
     const dataDir = path.join(temp.dir, 'fresh');
     const first = await openDatabase({ dataDir, snapshotFile: pgliteSnapshotFile() });

@@ -4,17 +4,29 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { openDatabase } from '../../server/db/client';
 import { auditLog } from '../../server/db/schema/audit';
 import { makeTempDir, startServerProcess, stopProcess, type ServerProcess } from '../helpers/server-process';
-import { pgliteSnapshotFile } from '../helpers/test-database';
+import { createPostgresCopy, pgliteSnapshotFile } from '../helpers/test-database';
 
 const started: ServerProcess[] = [];
-const temps: { remove(): void }[] = [];
+const cleanups: (() => unknown)[] = [];
 afterEach(async () => {
   await Promise.all(started.splice(0).map(stopProcess));
-  temps.splice(0).forEach((t) => t.remove());
+  for (const cleanup of cleanups.splice(0)) await cleanup();
 });
 
-function start(dataDir: string) {
-  const server = startServerProcess({ DATA_DIR: dataDir, DB_SNAPSHOT: pgliteSnapshotFile() });
+/** Where the server keeps its data in this run: a new PGlite folder, or a new PostgreSQL database. */
+async function newDataHome(): Promise<Record<string, string>> {
+  const postgres = await createPostgresCopy();
+  if (postgres) {
+    cleanups.push(() => postgres.drop());
+    return { DATABASE_URL: postgres.url };
+  }
+  const temp = makeTempDir('shutdown');
+  cleanups.push(() => temp.remove());
+  return { DATA_DIR: temp.dir, DB_SNAPSHOT: pgliteSnapshotFile() };
+}
+
+function start(home: Record<string, string>) {
+  const server = startServerProcess(home);
   started.push(server);
   return server;
 }
@@ -41,10 +53,8 @@ function beginRequest(url: string) {
 // Real processes: each start loads the snapshot and imports the server, a few seconds on a busy machine.
 describe('graceful shutdown', { timeout: 60_000 }, () => {
   it('finishes a request in flight, keeps what was committed, and exits 0 on SIGTERM', async () => {
-    const temp = makeTempDir('shutdown');
-    temps.push(temp);
-
-    const first = start(temp.dir);
+    const home = await newDataHome();
+    const first = start(home);
     const url = await first.ready;
     const inFlight = beginRequest(url);
     await new Promise((resolve) => setTimeout(resolve, 200));
@@ -58,13 +68,13 @@ describe('graceful shutdown', { timeout: 60_000 }, () => {
     expect(JSON.parse(answer.body)).toMatchObject({ status: 404, instance: '/api/in-flight-probe' });
     expect(await first.exited).toBe(0);
 
-    const second = start(temp.dir);
+    const second = start(home);
     await second.ready;
     second.child.kill('SIGINT');
     expect(await second.exited).toBe(0);
 
     // Both runs' start and stop rows are there, the stop rows written during shutdown itself.
-    const database = await openDatabase({ dataDir: temp.dir });
+    const database = await openDatabase({ dataDir: home.DATA_DIR ?? 'memory', databaseUrl: home.DATABASE_URL });
     try {
       const rows = await database.db
         .select({ action: auditLog.action, details: auditLog.details })

@@ -14,7 +14,11 @@ export function expectedDriver(): 'pglite' | 'postgres' {
 }
 
 export function pgliteSnapshotFile(): string {
-  return inject('pgliteSnapshotFile');
+  const file = inject('pgliteSnapshotFile');
+  if (!file) {
+    throw new Error('no test database snapshot: register tests/helpers/global-setup.ts in vite.config.ts test.globalSetup');
+  }
+  return file;
 }
 
 /**
@@ -22,22 +26,34 @@ export function pgliteSnapshotFile(): string {
  * snapshot, or, with DATABASE_URL, a fresh copy of the run's template database (dropped on close).
  */
 export async function openTestDatabase(): Promise<DatabaseHandle> {
-  const postgres = inject('postgres');
+  const postgres = await createPostgresCopy();
   if (!postgres) {
-    snapshot ??= new Blob([readFileSync(inject('pgliteSnapshotFile'))]);
+    snapshot ??= new Blob([readFileSync(pgliteSnapshotFile())]);
     return openDatabase({ dataDir: 'memory', snapshot });
   }
-
-  copies += 1;
-  const name = `${postgres.prefix}${process.pid}_${copies}`;
-  await adminQuery(postgres.adminUrl, `create database "${name}" template "${postgres.templateDatabase}"`);
-  const handle = await openDatabase({ databaseUrl: databaseUrlFor(postgres.adminUrl, name), dataDir: 'memory' });
+  const handle = await openDatabase({ databaseUrl: postgres.url, dataDir: 'memory' });
   return {
     ...handle,
     async close() {
       await handle.close();
-      await adminQuery(postgres.adminUrl, `drop database if exists "${name}" with (force)`);
+      await postgres.drop();
     },
+  };
+}
+
+/**
+ * With DATABASE_URL: a new database copied from the run's migrated template, for a test that
+ * hands it to a server process; null on a PGlite-only run.
+ */
+export async function createPostgresCopy(): Promise<{ url: string; drop(): Promise<void> } | null> {
+  const postgres = inject('postgres');
+  if (!postgres) return null;
+  copies += 1;
+  const name = `${postgres.prefix}${process.pid}_${copies}`;
+  await adminQuery(postgres.adminUrl, `create database "${name}" template "${postgres.templateDatabase}"`);
+  return {
+    url: databaseUrlFor(postgres.adminUrl, name),
+    drop: () => adminQuery(postgres.adminUrl, `drop database if exists "${name}" with (force)`),
   };
 }
 
