@@ -3,7 +3,8 @@
 // from the build's snapshot) and again on the same folder (restart); and the resident memory
 // of the server's processes once it is up. A measurement to read, not a test that passes.
 //
-//   npx tsx scripts/db-start-timing.ts [runs=3]
+//   npm run bench:db-start -- [runs=3] [--runner=node]
+//   (--runner=node starts `node --import tsx server/index.ts`: no tsx wrapper process)
 import { spawn } from 'node:child_process';
 import { mkdtempSync, readdirSync, readFileSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
@@ -11,11 +12,16 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 
 const root = fileURLToPath(new URL('..', import.meta.url));
-const runs = Number(process.argv[2] ?? 3);
+const args = process.argv.slice(2);
+const runs = Number(args.find((a) => /^\d+$/.test(a)) ?? 3);
+const viaNode = args.includes('--runner=node');
 
 async function startOnce(dataDir: string, port: number) {
   const started = performance.now();
-  const child = spawn(path.join(root, 'node_modules/.bin/tsx'), ['server/index.ts'], {
+  const [command, commandArgs] = viaNode
+    ? [process.execPath, ['--import', 'tsx', 'server/index.ts']]
+    : [path.join(root, 'node_modules/.bin/tsx'), ['server/index.ts']];
+  const child = spawn(command, commandArgs, {
     cwd: root,
     env: { ...process.env, DATA_DIR: dataDir, PORT: String(port), LOG_LEVEL: 'warn', DATABASE_URL: '' },
     stdio: 'ignore',

@@ -17,7 +17,7 @@ export async function openPostgres(options: OpenPostgresOptions): Promise<Databa
   // An idle client that loses its connection emits here; without a listener it would crash us.
   pool.on('error', (error) => options.logger?.error({ err: error }, 'postgres pool client error'));
   try {
-    await migrate(drizzle({ client: pool }), { migrationsFolder });
+    await migrateUnderLock(pool);
   } catch (error) {
     await pool.end();
     throw error;
@@ -38,4 +38,22 @@ export async function openPostgres(options: OpenPostgresOptions): Promise<Databa
       await pool.end();
     },
   };
+}
+
+// Any constant shared by every Pinwork instance; it names the lock, nothing more.
+const MIGRATION_LOCK_KEY = 7_201_560_300;
+
+/** Several instances may start at once against one server: one migrates, the others wait. */
+async function migrateUnderLock(pool: pg.Pool): Promise<void> {
+  const lockClient = await pool.connect();
+  try {
+    await lockClient.query('select pg_advisory_lock($1)', [MIGRATION_LOCK_KEY]);
+    try {
+      await migrate(drizzle({ client: pool }), { migrationsFolder });
+    } finally {
+      await lockClient.query('select pg_advisory_unlock($1)', [MIGRATION_LOCK_KEY]);
+    }
+  } finally {
+    lockClient.release();
+  }
 }

@@ -42,15 +42,18 @@ export async function openTestDatabase(): Promise<DatabaseHandle> {
 }
 
 /**
- * With DATABASE_URL: a new database copied from the run's migrated template, for a test that
- * hands it to a server process; null on a PGlite-only run.
+ * With DATABASE_URL: a new database copied from the run's migrated template (or an empty one),
+ * for a test that hands it to a server process; null on a PGlite-only run.
  */
-export async function createPostgresCopy(): Promise<{ url: string; drop(): Promise<void> } | null> {
+export async function createPostgresCopy(
+  options: { empty?: boolean } = {},
+): Promise<{ url: string; drop(): Promise<void> } | null> {
   const postgres = inject('postgres');
   if (!postgres) return null;
   copies += 1;
   const name = `${postgres.prefix}${process.pid}_${copies}`;
-  await adminQuery(postgres.adminUrl, `create database "${name}" template "${postgres.templateDatabase}"`);
+  const template = options.empty ? 'template0' : postgres.templateDatabase;
+  await adminQuery(postgres.adminUrl, `create database "${name}" template "${template}"`);
   return {
     url: databaseUrlFor(postgres.adminUrl, name),
     drop: () => adminQuery(postgres.adminUrl, `drop database if exists "${name}" with (force)`),
