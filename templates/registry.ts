@@ -4,10 +4,11 @@ import { plateLiftingClamp } from './plate-lifting-clamp/spec';
 import { scissorLiftTable } from './scissor-lift-table/spec';
 import { scissorLiftingTongs } from './scissor-lifting-tongs/spec';
 import { shopCrane } from './shop-crane/spec';
+import { toggleClamp } from './toggle-clamp/spec';
 import { wallJibTieRod } from './wall-jib-tie-rod/spec';
 
 /**
  * The built-in templates, in the order the library shows them. Seeding stores each as a
  * published version; a changed spec here becomes a new version, never an overwrite.
  */
-export const builtInTemplates: TemplateSpecInput[] = [scissorLiftingTongs, aFrameCrossbar, wallJibTieRod, scissorLiftTable, shopCrane, plateLiftingClamp];
+export const builtInTemplates: TemplateSpecInput[] = [scissorLiftingTongs, toggleClamp, aFrameCrossbar, wallJibTieRod, scissorLiftTable, shopCrane, plateLiftingClamp];
