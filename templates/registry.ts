@@ -1,6 +1,7 @@
 import type { TemplateSpecInput } from '../shared/spec/template-spec';
 import { aFrameCrossbar } from './a-frame-crossbar/spec';
 import { compoundLeverCutter } from './compound-lever-cutter/spec';
+import { fourBarLinkage } from './four-bar-linkage/spec';
 import { plateLiftingClamp } from './plate-lifting-clamp/spec';
 import { scissorLiftTable } from './scissor-lift-table/spec';
 import { scissorLiftingTongs } from './scissor-lifting-tongs/spec';
@@ -12,4 +13,4 @@ import { wallJibTieRod } from './wall-jib-tie-rod/spec';
  * The built-in templates, in the order the library shows them. Seeding stores each as a
  * published version; a changed spec here becomes a new version, never an overwrite.
  */
-export const builtInTemplates: TemplateSpecInput[] = [scissorLiftingTongs, toggleClamp, aFrameCrossbar, wallJibTieRod, compoundLeverCutter, scissorLiftTable, shopCrane, plateLiftingClamp];
+export const builtInTemplates: TemplateSpecInput[] = [scissorLiftingTongs, toggleClamp, aFrameCrossbar, wallJibTieRod, compoundLeverCutter, scissorLiftTable, shopCrane, fourBarLinkage, plateLiftingClamp];
