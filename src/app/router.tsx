@@ -1,4 +1,4 @@
-import { createBrowserRouter, Outlet, RouterProvider, ScrollRestoration } from 'react-router-dom';
+import { createBrowserRouter, Navigate, Outlet, RouterProvider, ScrollRestoration } from 'react-router-dom';
 import { AppShell } from '../components/app-shell';
 import { HomeRoute } from './routes/home';
 import { HowItWorksRoute } from './routes/how-it-works';
@@ -15,6 +15,8 @@ function RootLayout() {
   );
 }
 
+const calculatorRoute = () => import('./routes/calculator').then((m) => ({ Component: m.CalculatorRoute }));
+
 export const router = createBrowserRouter([
   {
     path: '/',
@@ -22,7 +24,12 @@ export const router = createBrowserRouter([
     errorElement: <RouteErrorBoundary />,
     children: [
       { index: true, element: <HomeRoute /> },
-      { path: 'library', element: <LibraryRoute /> },
+      { path: 'templates', element: <LibraryRoute /> },
+      // The calculator (RJSF, the drawings) loads with its own route, so the library stays light.
+      { path: 'templates/:slug', lazy: calculatorRoute },
+      { path: 'templates/:slug/v/:version', lazy: calculatorRoute },
+      // The library's first address, kept so old links still arrive.
+      { path: 'library', element: <Navigate to="/templates" replace /> },
       { path: 'how-it-works', element: <HowItWorksRoute /> },
       { path: '*', element: <NotFoundRoute /> },
     ],

@@ -10,7 +10,7 @@ interface NavItem {
 }
 
 const navItems: NavItem[] = [
-  { to: '/library', label: 'Library', soon: true },
+  { to: '/templates', label: 'Library' },
   { to: '/how-it-works', label: 'How it works' },
 ];
 
@@ -30,7 +30,7 @@ export function AppShell({ children }: { children: ReactNode }) {
       >
         Skip to content
       </a>
-      <header className="bg-ink-900 text-paper-50">
+      <header className="bg-ink-900 text-paper-50 print:hidden">
         <div className="mx-auto flex max-w-page flex-wrap items-center justify-between gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
           <Link to="/" className="flex items-center gap-2.5 rounded-md py-1 text-lg font-extrabold tracking-tight">
             <LogoMark />

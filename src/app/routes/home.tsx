@@ -48,10 +48,10 @@ export function HomeRoute() {
                 How a solve works
               </Link>
               <Link
-                to="/library"
+                to="/templates"
                 className="rounded-lg border border-ink-300 px-5 py-3 text-sm font-bold text-ink-800 hover:bg-ink-50"
               >
-                Template library (coming soon)
+                Open the template library
               </Link>
             </div>
           </div>
@@ -73,8 +73,8 @@ export function HomeRoute() {
             ))}
           </ul>
           <p className="mt-5 text-sm text-ink-700">
-            This is an early build. The template library, the calculators and supplier embeds are
-            being built now; the status panel shows what is running today.
+            This is an early build: the template library and its calculators are open; supplier
+            embeds are being built now. The status panel shows what is running today.
           </p>
         </section>
         <div className="flex flex-col gap-6">
