@@ -50,6 +50,10 @@ async function main(): Promise<void> {
       process.stderr.write(`${error.message}\n`);
       process.exit(1);
     }
+    if ((error as NodeJS.ErrnoException).code === 'EADDRINUSE') {
+      process.stderr.write(`Pinwork cannot listen on port ${config.port}: it is in use; stop what uses it or set PORT to another port\n`);
+      process.exit(1);
+    }
     logger.fatal({ err: error }, 'Pinwork could not start');
     process.exit(1);
   }
