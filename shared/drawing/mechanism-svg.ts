@@ -50,7 +50,7 @@ export function mechanismSvg(spec: DrawingSpec, result: SolveResult, options: Me
   const centre = view.toSvg(centroid(allPoints(result)));
 
   const dims: string[] = [];
-  (spec.dimensions ?? []).forEach((d, i) => {
+  (spec.dimensions ?? []).forEach((d) => {
     const a = result.points[d.between[0]];
     const b = result.points[d.between[1]];
     const input = spec.inputs.find((x) => x.key === d.input);
@@ -58,30 +58,41 @@ export function mechanismSvg(spec: DrawingSpec, result: SolveResult, options: Me
     if (!a || !b || !input || value === undefined) return;
     const p = view.toSvg(a);
     const q = view.toSvg(b);
-    let side = unit(perp(sub(q, p)));
-    if (dot(side, sub(p, centre)) + dot(side, sub(q, centre)) < 0) side = { x: -side.x, y: -side.y };
+    const normal = unit(perp(sub(q, p)));
+    const outward = dot(normal, sub(p, centre)) + dot(normal, sub(q, centre)) >= 0 ? normal : { x: -normal.x, y: -normal.y };
     const shown = formatQuantity(value, input.quantity, system);
-    const offset = 40 + 18 * i;
+    const half = { w: shown.length * 3.6 + 6, h: 9 };
+    const horizontal = Math.abs(q.x - p.x) >= Math.abs(q.y - p.y);
+    const fractions = [0.5, 0.4, 0.6, 0.3, 0.7, 0.22, 0.78];
+    // Try both sides at a few stand-offs and the value at a few places along the line; keep the
+    // arrangement that hides least, preferring the outer side, a short stand-off and the middle.
+    let best = { score: Infinity, side: outward, offset: 40, t: 0.5 };
+    for (const [side, sideCost] of [[outward, 0], [{ x: -outward.x, y: -outward.y }, 60]] as const) {
+      for (const [k, offset] of [34, 52, 70, 88].entries()) {
+        const a0 = add(p, times(side, offset));
+        const b0 = add(q, times(side, offset));
+        const lineBox = { x0: Math.min(a0.x, b0.x), y0: Math.min(a0.y, b0.y), x1: Math.max(a0.x, b0.x), y1: Math.max(a0.y, b0.y) };
+        const base = sideCost + k * 25 + placer.score({ x0: lineBox.x0 - 2, y0: lineBox.y0 - 2, x1: lineBox.x1 + 2, y1: lineBox.y1 + 2 }, 2);
+        for (const t of fractions) {
+          const c = add(a0, times(sub(b0, a0), t));
+          const [hw, hh] = horizontal ? [half.w, half.h] : [half.h, half.w];
+          const score = base + Math.abs(t - 0.5) * 40 + placer.score({ x0: c.x - hw, y0: c.y - hh, x1: c.x + hw, y1: c.y + hh });
+          if (score < best.score) best = { score, side, offset, t };
+        }
+      }
+    }
+    const { side, offset, t } = best;
     const a0 = add(p, times(side, offset));
     const b0 = add(q, times(side, offset));
-    // Slide the value along the line to where it hides least (usually the middle).
-    const half = { w: shown.length * 3.6 + 6, h: 9 };
-    const chipAt = (t: number) => add(a0, times(sub(b0, a0), t));
-    const horizontal = Math.abs(b0.x - a0.x) >= Math.abs(b0.y - a0.y);
-    const boxAt = (t: number) => {
-      const c = chipAt(t);
-      const [hw, hh] = horizontal ? [half.w, half.h] : [half.h, half.w];
-      return { x0: c.x - hw, y0: c.y - hh, x1: c.x + hw, y1: c.y + hh };
-    };
-    const fractions = [0.5, 0.4, 0.6, 0.3, 0.7, 0.22, 0.78];
-    const t = fractions.reduce((best, f) => (placer.score(boxAt(f)) + Math.abs(f - 0.5) * 40 < placer.score(boxAt(best)) + Math.abs(best - 0.5) * 40 ? f : best), 0.5);
+    const chip = add(a0, times(sub(b0, a0), t));
+    const [hw, hh] = horizontal ? [half.w, half.h] : [half.h, half.w];
     dims.push(dimensionLine(p, q, shown, {
       side, offset, highlighted: options.highlightInput === d.input, title: `${input.label}: ${shown}`, input: d.input, at: t,
     }));
     placer.addSegment(a0, b0, 2);
     placer.addSegment(p, a0, 1);
     placer.addSegment(q, b0, 1);
-    placer.addBox(boxAt(t));
+    placer.addBox({ x0: chip.x - hw, y0: chip.y - hh, x1: chip.x + hw, y1: chip.y + hh });
   });
 
   const loads = layers.finishLoads(placer);
