@@ -92,7 +92,7 @@ function distribute(t: CompiledTemplate, s: Assembled, x: Float64Array, env: Sol
   });
   t.loads.forEach((l, i) => {
     if (l.kind === 'couple') {
-      env.lmag[i] = l.unknownColumn !== undefined ? x[l.unknownColumn]! : s.kfx[i]!;
+      env.lmag[i] = l.unknownColumn !== undefined ? x[l.unknownColumn]! * s.length : s.kfx[i]!;
       env.lfx[i] = 0;
       env.lfy[i] = 0;
     } else if (l.unknown) {

@@ -91,6 +91,14 @@ describe('toggle: output-to-input ratio as a function of link angle', () => {
     expect(r.verification.virtualWork!.relativeDifference).toBeLessThan(1e-6);
   });
 
+  it('virtual work keeps its accuracy at the ends of the drive range (one-sided differences)', () => {
+    for (const alpha of [80, 0.5]) {
+      const spec = { ...toggleSpec, inputs: toggleSpec.inputs.map((i) => (i.key === 'alpha' ? { ...i, min: 0.5 } : i)) };
+      const r = ok(solve(spec, { alpha }));
+      expect(r.verification.virtualWork!.relativeDifference).toBeLessThan(1e-7);
+    }
+  });
+
   it('the ratio does not depend on link length (dimensionless statics)', () => {
     const a = result(ok(solve(toggleSpec, { alpha: 7, L: 50 })), 'MA');
     const b = result(ok(solve(toggleSpec, { alpha: 7, L: 900 })), 'MA');

@@ -75,6 +75,10 @@ describe('four-bar linkage with an output couple of unknown moment', () => {
     expect(v('ratio')).toBeCloseTo(3.429, 3);
     expect(load(r, 'T4').solved).toBe(true);
     expectBalanced(r);
+    // The unknown couple's column is scaled like the force columns: a well-conditioned system,
+    // no false "close to a dead centre" warning.
+    expect(r.verification.conditioning).toBeGreaterThan(0.05);
+    expect(r.warnings).toEqual([]);
   });
 
   it.each([20, 60, 110, 200, 300])('follows loop closure and virtual power at θ2 = %d°', (theta2) => {

@@ -230,8 +230,10 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
   for (let i = 0; i < nl; i++) {
     const l = t.loads[i]!;
     if (l.kind !== 'couple' || l.unknownColumn === undefined) continue;
+    // The unknown is the moment divided by the length scale, so its column is of order one like
+    // the others (a column of 1/L would look like a near-singular system); distribute() scales back.
     const mr = rowOf[3 * l.part + 2]!;
-    a[mr * n + l.unknownColumn] = invL;
+    a[mr * n + l.unknownColumn] = 1;
   }
   return { m, n, a, b, ux, uy, nx, ny, mu, length, loadScale, rowPart, rx, ry, kfx, kfy, dx, dy };
 }
