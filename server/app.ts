@@ -6,6 +6,9 @@ import { requestLogging } from './middleware/request-logging';
 import { securityHeaders } from './middleware/security-headers';
 import { serveClient } from './middleware/serve-client';
 import { healthRouter } from './routes/health';
+import { templateRoutes } from './routes/templates';
+import { TemplateCatalogue } from './services/templates/catalogue';
+import { TemplateStore } from './services/templates/template-store';
 import { appVersion } from './version';
 
 export interface AppOptions {
@@ -34,6 +37,7 @@ export function createApp(options: AppOptions): express.Express {
 
   const api = express.Router();
   api.use(healthRouter(database, options.version ?? appVersion));
+  api.use(templateRoutes(new TemplateCatalogue(new TemplateStore(database.db))));
   api.use(apiNotFound);
   app.use('/api', api);
 

@@ -8,6 +8,8 @@ import { MEMORY_DATA_DIR, openDatabase } from './db/client';
 import { lockDataFolder, type DataFolderLock } from './db/data-folder-lock';
 import type { DatabaseHandle } from './db/database';
 import { seedDemoData } from './db/seed';
+import { seedBuiltInTemplates } from './db/seed-templates';
+import { builtInTemplates } from '../templates/registry';
 import { recordAudit } from './services/audit';
 import { appVersion } from './version';
 
@@ -42,6 +44,8 @@ export async function startServer(
     });
     const seeded = await seedDemoData(database.db);
     logger.info({ seeded }, 'demo data checked');
+    const seededTemplates = await seedBuiltInTemplates(database.db, builtInTemplates, 'tallow-ridge-engineering');
+    logger.info({ seededTemplates }, 'built-in templates checked');
     await recordAudit(database.db, {
       actorKind: 'system',
       action: 'server.start',

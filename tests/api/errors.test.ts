@@ -74,7 +74,7 @@ describe('problem details for bad requests', () => {
   it.each([
     ['GET', '/api/no-such-endpoint'],
     ['GET', '/api'],
-    ['DELETE', '/api/templates/unknown'],
+    ['DELETE', '/api/no-such-area/unknown'],
     ['POST', '/api/health/extra'],
   ])('answers %s %s with a 404 problem, also when the client asks for HTML', async (method, url) => {
     const res = await request(app)[method.toLowerCase() as 'get'](url).set('Accept', 'text/html');

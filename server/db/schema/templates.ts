@@ -44,6 +44,11 @@ export const templateVersions = pgTable(
     spec: jsonb('spec').notNull(),
     contentHash: text('content_hash').notNull(),
     changelog: text('changelog').notNull().default(''),
+    /**
+     * The precompiled input validator (RJSF / ajv standalone code) generated when the version is
+     * published, served as a same-origin script so the form validates under a CSP without eval.
+     */
+    validatorScript: text('validator_script'),
     authorId: text('author_id').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     publishedAt: timestamp('published_at', { withTimezone: true }),
