@@ -1,7 +1,7 @@
 import { existsSync, mkdirSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { count } from 'drizzle-orm';
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openDatabase, pgliteFolder } from '../../server/db/client';
 import { organisations } from '../../server/db/schema/organisations';
 import { seedDemoData } from '../../server/db/seed';
@@ -10,10 +10,13 @@ import { makeTempDir } from '../helpers/server-process';
 import { pgliteSnapshotFile } from '../helpers/test-database';
 
 // About PGlite's folder only, so the run against PostgreSQL (DATABASE_URL) skips it.
-const temp = makeTempDir('folder');
-afterAll(() => temp.remove());
-
 describe.skipIf(Boolean(process.env.DATABASE_URL))('the embedded database folder', () => {
+  let temp: ReturnType<typeof makeTempDir>;
+  beforeAll(() => {
+    temp = makeTempDir('folder');
+  });
+  afterAll(() => temp?.remove());
+
   it('starts a new folder from the snapshot, migrated, and keeps its rows across a reopen', async () => {
     const dataDir = path.join(temp.dir, 'fresh');
     const first = await openDatabase({ dataDir, snapshotFile: pgliteSnapshotFile() });
