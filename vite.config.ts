@@ -21,5 +21,6 @@ export default defineConfig({
     include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx'],
     exclude: ['tests/e2e/**', 'node_modules/**'],
     environment: 'node',
+    globalSetup: ['tests/helpers/global-setup.ts'],
   },
 });

@@ -1,9 +1,8 @@
-import { eq, inArray } from 'drizzle-orm';
+import { inArray } from 'drizzle-orm';
 import type { Database } from './database';
 import { demoOrganisations, demoUsers } from './demo-data';
 import { users } from './schema/auth';
 import { members, organisations } from './schema/organisations';
-import { templates, templateVersions } from './schema/templates';
 
 export interface SeedReport {
   organisations: number;
@@ -61,76 +60,4 @@ export async function seedDemoData(db: Database): Promise<SeedReport> {
       members: insertedMembers.length,
     };
   });
-}
-
-/** One built-in template as the templates issue will hand it over: a spec with its hash. */
-export interface BuiltInTemplate {
-  slug: string;
-  title: string;
-  category: string;
-  summary: string;
-  semver: string;
-  changelog: string;
-  spec: unknown;
-  /** Hash of the spec's canonical form, computed by whoever owns the spec format. */
-  contentHash: string;
-  /** Slug of the organisation that owns it; built-ins belong to the demo engineering org. */
-  ownerOrganisationSlug: string;
-}
-
-/**
- * Hook for the built-in templates issue: inserts each template and its version as published,
- * once. A spec change must come with a new semver (published versions are frozen), and an
- * existing (slug, semver) is left exactly as it is.
- */
-export async function seedBuiltInTemplates(
-  db: Database,
-  builtIns: readonly BuiltInTemplate[],
-): Promise<{ templates: number; versions: number }> {
-  let insertedTemplates = 0;
-  let insertedVersions = 0;
-  await db.transaction(async (tx) => {
-    for (const builtIn of builtIns) {
-      const [owner] = await tx
-        .select({ id: organisations.id })
-        .from(organisations)
-        .where(eq(organisations.slug, builtIn.ownerOrganisationSlug));
-      if (!owner) throw new Error(`built-in template ${builtIn.slug}: no organisation ${builtIn.ownerOrganisationSlug}`);
-
-      const inserted = await tx
-        .insert(templates)
-        .values({
-          slug: builtIn.slug,
-          title: builtIn.title,
-          category: builtIn.category,
-          summary: builtIn.summary,
-          ownerOrganisationId: owner.id,
-        })
-        .onConflictDoNothing({ target: templates.slug })
-        .returning({ id: templates.id });
-      insertedTemplates += inserted.length;
-
-      const [template] = await tx
-        .select({ id: templates.id })
-        .from(templates)
-        .where(eq(templates.slug, builtIn.slug));
-      if (!template) throw new Error(`built-in template ${builtIn.slug} vanished while seeding`);
-
-      const version = await tx
-        .insert(templateVersions)
-        .values({
-          templateId: template.id,
-          semver: builtIn.semver,
-          status: 'published',
-          spec: builtIn.spec,
-          contentHash: builtIn.contentHash,
-          changelog: builtIn.changelog,
-          publishedAt: new Date(),
-        })
-        .onConflictDoNothing({ target: [templateVersions.templateId, templateVersions.semver] })
-        .returning({ id: templateVersions.id });
-      insertedVersions += version.length;
-    }
-  });
-  return { templates: insertedTemplates, versions: insertedVersions };
 }

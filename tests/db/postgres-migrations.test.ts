@@ -23,11 +23,11 @@ describe.skipIf(!process.env.DATABASE_URL)('migrations on a PostgreSQL server', 
       [1, 2, 3].map(() => openDatabase({ databaseUrl: empty!.url, dataDir: 'memory' })),
     );
     try {
-      const rows = await handles[0]!.db.execute(sql`select count(*)::int as n from drizzle.__drizzle_migrations`);
+      const rows = (await handles[0]!.db.execute(sql`select count(*)::int as n from drizzle.__drizzle_migrations`)) as unknown as { rows: unknown[] };
       expect((rows.rows[0] as { n: number }).n).toBe(journal.entries.length);
-      const trigger = await handles[0]!.db.execute(
+      const trigger = (await handles[0]!.db.execute(
         sql`select count(*)::int as n from pg_trigger where tgname like 'template_versions_frozen_%'`,
-      );
+      )) as unknown as { rows: unknown[] };
       expect((trigger.rows[0] as { n: number }).n).toBe(2);
     } finally {
       await Promise.all(handles.map((h) => h.close()));

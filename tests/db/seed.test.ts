@@ -4,8 +4,7 @@ import type { Database, DatabaseHandle } from '../../server/db/database';
 import { demoOrganisations, demoUsers } from '../../server/db/demo-data';
 import { users } from '../../server/db/schema/auth';
 import { members, organisations } from '../../server/db/schema/organisations';
-import { templates, templateVersions } from '../../server/db/schema/templates';
-import { seedBuiltInTemplates, seedDemoData, type BuiltInTemplate } from '../../server/db/seed';
+import { seedDemoData } from '../../server/db/seed';
 import { openTestDatabase } from '../helpers/test-database';
 
 let handle: DatabaseHandle;
@@ -69,30 +68,5 @@ describe('demo seed', () => {
     await seedDemoData(db);
     const [row] = await db.select({ name: users.name }).from(users).where(eq(users.email, admin.email));
     expect(row?.name).toBe('Renamed by the admin');
-  });
-
-  it('seeds built-in templates once, as published versions', async () => {
-    await seedDemoData(db);
-    const builtIn: BuiltInTemplate = {
-      slug: 'seed-test-toggle-clamp',
-      title: 'Seed test toggle clamp',
-      category: 'workholding',
-      summary: 'Only for this test.',
-      semver: '1.0.0',
-      changelog: 'First version.',
-      spec: { specVersion: 1, inputs: [] },
-      contentHash: 'sha256-seed-test',
-      ownerOrganisationSlug: demoOrganisations[0]!.slug,
-    };
-    expect(await seedBuiltInTemplates(db, [builtIn])).toEqual({ templates: 1, versions: 1 });
-    expect(await seedBuiltInTemplates(db, [builtIn])).toEqual({ templates: 0, versions: 0 });
-    const versions = await db
-      .select({ status: templateVersions.status, publishedAt: templateVersions.publishedAt })
-      .from(templateVersions)
-      .innerJoin(templates, eq(templates.id, templateVersions.templateId))
-      .where(eq(templates.slug, builtIn.slug));
-    expect(versions).toHaveLength(1);
-    expect(versions[0]!.status).toBe('published');
-    expect(versions[0]!.publishedAt).toBeInstanceOf(Date);
   });
 });
