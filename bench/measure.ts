@@ -2,9 +2,13 @@
  * Median time per call: batches sized to take about `batchMs` each, the median of the
  * batch means. Medians over batches ride out GC pauses and the other core's noise.
  */
-export function measure(fn: () => unknown, { batches = 31, batchMs = 20 } = {}): number {
+export function measure(fn: () => unknown, { batches = 31, batchMs = 20, warmupMs = 500 } = {}): number {
   let sink: unknown;
-  // Warm up and size the batch.
+  // Warm up long enough for the optimising compiler to settle: the first few hundred
+  // milliseconds of a fresh function run several times slower than its steady state.
+  const warmEnd = performance.now() + warmupMs;
+  while (performance.now() < warmEnd) sink = fn();
+  // Size the batch.
   let n = 1;
   for (;;) {
     const t0 = performance.now();
