@@ -111,11 +111,13 @@ describe('the built app served by the Pinwork server', () => {
     expect(problems.all()).toEqual([]);
   });
 
-  it('marks the library as coming soon instead of pretending it works', async () => {
+  it('sends the library’s first address on to /templates, and the main navigation links there', async () => {
     await page.goto(`${server.url}/library`, { waitUntil: 'networkidle' });
+    await page.waitForURL('**/templates');
     expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Template library');
-    expect(await page.getByRole('navigation', { name: 'Main' }).textContent()).toMatch(/Library\s*coming soon/i);
-    expect(await page.getByText('No templates are available in this build yet').isVisible()).toBe(true);
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    expect(await nav.getByRole('link', { name: 'Library' }).getAttribute('href')).toBe('/templates');
+    expect(await nav.textContent()).not.toMatch(/coming soon/i);
     expect(problems.all()).toEqual([]);
   });
 

@@ -2,6 +2,7 @@ import type { RJSFSchema } from '@rjsf/utils';
 import { lazy, Suspense, useMemo, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { forcesTextAlternative } from '../../../shared/drawing/forces-text';
+import { freeBodySvg } from '../../../shared/drawing/free-body-svg';
 import { mechanismSvg } from '../../../shared/drawing/mechanism-svg';
 import { formatNumber } from '../../../shared/units/format';
 import { toDisplay, unitOf } from '../../../shared/units/unit-systems';
@@ -23,7 +24,6 @@ import { useInputValidator } from '../../features/calculator/hooks/use-input-val
 import { useLiveSolve } from '../../features/calculator/hooks/use-live-solve';
 import { ApiError } from '../../lib/api-client';
 import { downloadCsv } from '../../lib/csv';
-import { freeBodyDrawing } from '../drawings';
 
 // Recharts is large: the charts load after the calculator is on screen.
 const ChartsPanel = lazy(() => import('../../features/charts/components/charts-panel'));
@@ -93,17 +93,14 @@ function Calculator({ detail, pinned }: { detail: TemplateDetail; pinned: boolea
     const out: DrawingView[] = [
       { id: 'mechanism', label: 'Mechanism', svg: mechanismSvg(spec, result, { unitSystem: system, highlightInput: changed, idPrefix: 'calc-mech' }) },
     ];
-    if (freeBodyDrawing) {
-      for (const part of spec.parts) {
-        out.push({ id: part.id, label: `Free body: ${part.label}`, svg: freeBodyDrawing(spec, result, part.id, { unitSystem: system, idPrefix: `calc-fb-${part.id}` }) });
-      }
+    for (const part of spec.parts) {
+      out.push({ id: part.id, label: `Free body: ${part.label}`, svg: freeBodySvg(spec, result, part.id, { unitSystem: system, idPrefix: `calc-fb-${part.id}` }) });
     }
     return out;
   }, [spec, result, system, changed]);
   const text = useMemo(() => (result ? forcesTextAlternative(spec, result, system) : null), [spec, result, system]);
   const rows = useMemo(() => (result ? resultRows(result, system) : []), [result, system]);
   const chartResults = detail.results;
-  const settledInputs = useMemo(() => JSON.parse(live.settledKey) as Record<string, number>, [live.settledKey]);
 
   const copyLink = async () => {
     try {
@@ -180,7 +177,7 @@ function Calculator({ detail, pinned }: { detail: TemplateDetail; pinned: boolea
         <PrintedInputs detail={detail} values={state.engine} system={system} />
 
         <div className="grid min-w-0 gap-6 print:gap-3">
-          <SolveStatus updating={live.updating} stale={live.stale} hasResult={result !== null} problem={live.problem} invalidInputs={!inputsValid} />
+          <SolveStatus updating={live.updating} stale={live.stale} hasResult={result !== null} problem={live.problem} invalidInputs={!inputsValid} solvedFor={live.settledKey} />
           {result && (
             <Section id="drawing-heading" title="Drawing" className="print:break-inside-avoid">
               <DrawingPanel views={views} selected={view} onSelect={setView} text={text} stale={live.stale} />
@@ -221,8 +218,8 @@ function Calculator({ detail, pinned }: { detail: TemplateDetail; pinned: boolea
 
       <Section id="charts-heading" title="Sensitivity" className="mt-6 print:hidden">
         <Suspense fallback={<p role="status" className="text-sm text-ink-700">Loading the charts…</p>}>
-          {inputsValid ? (
-            <ChartsPanel slug={detail.slug} version={detail.version} inputs={settledInputs} system={system}
+          {inputsValid && live.settledValid ? (
+            <ChartsPanel slug={detail.slug} version={detail.version} inputs={live.settledInputs} system={system}
               specInputs={spec.inputs} results={chartResults} />
           ) : (
             <p className="text-sm text-ink-700">Correct the marked input to draw the charts.</p>

@@ -71,7 +71,7 @@ export function DrawingPanel({ views, selected, onSelect, text, stale }: Drawing
         id={`${baseId}-panel`}
         role="tabpanel"
         aria-labelledby={`${baseId}-tab-${current.id}`}
-        data-drawing={current.id}
+        data-view={current.id}
         className={`mt-3 overflow-hidden rounded-xl border border-ink-100 bg-paper-50 transition-opacity [&>svg]:h-auto [&>svg]:w-full ${stale ? 'opacity-60' : ''}`}
         dangerouslySetInnerHTML={{ __html: current.svg }}
       />

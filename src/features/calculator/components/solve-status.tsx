@@ -18,10 +18,12 @@ interface SolveStatusProps {
   hasResult: boolean;
   problem: SolveProblem | null;
   invalidInputs: boolean;
+  /** The inputs (engine units, as JSON) the results on screen were solved for. */
+  solvedFor: string;
 }
 
 /** One line that says whether the results on screen belong to the inputs on screen, and why not. */
-export function SolveStatus({ updating, stale, hasResult, problem, invalidInputs }: SolveStatusProps) {
+export function SolveStatus({ updating, stale, hasResult, problem, invalidInputs, solvedFor }: SolveStatusProps) {
   let body;
   if (problem) {
     body = (
@@ -49,7 +51,7 @@ export function SolveStatus({ updating, stale, hasResult, problem, invalidInputs
     );
   } else if (hasResult) {
     body = (
-      <p className="flex items-center gap-2 px-1 py-1 text-sm font-semibold text-verdict-pass" data-solve-state="current">
+      <p className="flex items-center gap-2 px-1 py-1 text-sm font-semibold text-verdict-pass" data-solve-state="current" data-solved-for={solvedFor}>
         <span aria-hidden="true">✓</span> Results match the inputs.
       </p>
     );

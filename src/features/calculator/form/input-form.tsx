@@ -4,6 +4,7 @@ import { useMemo } from 'react';
 import type { InputDef } from '../../../../shared/spec/template-spec';
 import { unitOf, type UnitSystem } from '../../../../shared/units/unit-systems';
 import { displayBounds } from '../../../lib/units/display-quantity';
+import { ChoiceField } from './choice-field';
 import { ChoiceWidget } from './choice-widget';
 import type { FormValues } from './engine-units-validator';
 import type { FieldOptions } from './field-options';
@@ -14,6 +15,7 @@ import type { ValidatorType } from '@rjsf/utils';
 
 const widgets = { unitNumber: UnitNumberWidget, slider: SliderWidget, choice: ChoiceWidget };
 const templates = { FieldTemplate, ObjectFieldTemplate };
+const fields = { choice: ChoiceField };
 
 function uiSchemaFor(inputs: readonly InputDef[], system: UnitSystem): UiSchema<FormValues> {
   const ui: UiSchema<FormValues> = { 'ui:submitButtonOptions': { norender: true } };
@@ -22,7 +24,7 @@ function uiSchemaFor(inputs: readonly InputDef[], system: UnitSystem): UiSchema<
     const options: FieldOptions = { unit: unit || unitOf(input.quantity, system), min, max, step, help: input.help };
     if (input.control === 'choice' && input.choices) options.choices = input.choices;
     ui[input.key] = {
-      'ui:widget': input.control === 'slider' ? 'slider' : input.control === 'choice' ? 'choice' : 'unitNumber',
+      ...(input.control === 'choice' ? { 'ui:field': 'choice' } : { 'ui:widget': input.control === 'slider' ? 'slider' : 'unitNumber' }),
       'ui:title': input.label,
       'ui:options': { ...options },
     };
@@ -62,6 +64,7 @@ export function InputForm({ schema, inputs, system, values, onChange, validator,
       formData={values}
       validator={validator}
       widgets={widgets}
+      fields={fields}
       templates={templates}
       liveValidate="onChange"
       showErrorList={false}

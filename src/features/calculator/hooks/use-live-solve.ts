@@ -42,9 +42,12 @@ function describeProblem(error: unknown): SolveProblem {
  */
 export function useLiveSolve(slug: string, version: string, inputs: Record<string, number>, inputsValid: boolean) {
   const key = JSON.stringify(inputs);
-  const settledKey = useDebouncedValue(key, SOLVE_DEBOUNCE_MS);
+  // Validity settles together with the inputs: a request is only ever made for inputs that
+  // were valid when they settled (not for old inputs that a later, valid edit replaced).
+  const settledPair = useDebouncedValue(JSON.stringify([key, inputsValid]), SOLVE_DEBOUNCE_MS);
+  const [settledKey, settledValid] = useMemo(() => JSON.parse(settledPair) as [string, boolean], [settledPair]);
   const settled = useMemo(() => JSON.parse(settledKey) as Record<string, number>, [settledKey]);
-  const query = useSolve({ slug, version, inputs: settled }, inputsValid);
+  const query = useSolve({ slug, version, inputs: settled }, settledValid);
 
   const [lastGood, setLastGood] = useState<{ result: SolveResult; key: string } | null>(null);
   const current = query.data && !query.isPlaceholderData ? query.data.result : null;
@@ -66,5 +69,8 @@ export function useLiveSolve(slug: string, version: string, inputs: Record<strin
     updating: inputsValid && (key !== settledKey || query.isFetching),
     problem: settledKey === key ? problem : null,
     settledKey,
+    settledInputs: settled,
+    /** The settled inputs passed the form's checks (so charts may ask for them too). */
+    settledValid,
   };
 }

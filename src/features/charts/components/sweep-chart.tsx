@@ -145,7 +145,7 @@ export function SweepChart({ slug, version, inputs, system, specInputs, results 
         <figure className={`grid gap-2 transition-opacity ${sweep.isPlaceholderData ? 'opacity-60' : ''}`} data-chart="sweep" aria-busy={sweep.isFetching}>
           <div className="h-72 w-full rounded-xl border border-ink-100 bg-paper-50 p-2" aria-hidden="true">
             <ResponsiveContainer width="100%" height="100%">
-              <LineChart data={rows} margin={{ top: 10, right: 16, bottom: 24, left: 12 }}>
+              <LineChart accessibilityLayer={false} data={rows} margin={{ top: 10, right: 16, bottom: 24, left: 12 }}>
                 <CartesianGrid stroke="#d5e6e6" />
                 <XAxis
                   dataKey="x"

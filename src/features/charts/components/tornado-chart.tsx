@@ -70,7 +70,7 @@ export function TornadoChart({ slug, version, inputs, system, results }: Tornado
         <figure className={`grid gap-2 transition-opacity ${query.isPlaceholderData ? 'opacity-60' : ''}`} data-chart="tornado" aria-busy={query.isFetching}>
           <div className="w-full rounded-xl border border-ink-100 bg-paper-50 p-2" style={{ height: `${Math.max(160, rows.length * 44 + 60)}px` }} aria-hidden="true">
             <ResponsiveContainer width="100%" height="100%">
-              <BarChart data={rows} layout="vertical" margin={{ top: 8, right: 56, bottom: 8, left: 8 }} barCategoryGap="22%">
+              <BarChart accessibilityLayer={false} data={rows} layout="vertical" margin={{ top: 8, right: 56, bottom: 8, left: 8 }} barCategoryGap="22%">
                 <CartesianGrid stroke="#d5e6e6" horizontal={false} />
                 <XAxis type="number" domain={['auto', 'auto']} tickFormatter={(v: number) => formatNumber(v, { significant: 3 })} stroke="#357174" fontSize={12} />
                 <YAxis type="category" dataKey="label" width={150} stroke="#357174" fontSize={12} tick={{ fill: '#142e32' }} />
