@@ -211,7 +211,8 @@ describe.each(templates)('the calculator for %s', (slug) => {
     expect(await freeBody.getAttribute('role')).toBe('img');
     await page.getByRole('tab', { name: 'Mechanism' }).click();
 
-    // Sweep and tornado (the charts load lazily).
+    // Sweep and tornado (the charts load lazily, when scrolled near).
+    await page.locator('#charts-heading').scrollIntoViewIfNeeded();
     const sweep = page.locator('[data-chart="sweep"]');
     await sweep.waitFor({ timeout: 20_000 });
     await expect.poll(() => sweep.locator('.recharts-line path').count()).toBeGreaterThan(0);

@@ -24,6 +24,7 @@ import { useInputValidator } from '../../features/calculator/hooks/use-input-val
 import { useLiveSolve } from '../../features/calculator/hooks/use-live-solve';
 import { ApiError } from '../../lib/api-client';
 import { downloadCsv } from '../../lib/csv';
+import { useNearViewport } from '../../lib/use-near-viewport';
 
 // Recharts is large: the charts load after the calculator is on screen.
 const ChartsPanel = lazy(() => import('../../features/charts/components/charts-panel'));
@@ -84,6 +85,8 @@ function Calculator({ detail, pinned }: { detail: TemplateDetail; pinned: boolea
   };
 
   const [view, setView] = useState('mechanism');
+  // The charts (and their chunk, and their sweep and tornado requests) wait until scrolled near.
+  const [chartsRef, chartsNear] = useNearViewport<HTMLDivElement>();
   const [copied, setCopied] = useState(false);
   const result = live.result;
   const partLabel = (id: string) => spec.parts.find((p) => p.id === id)?.label ?? id;
@@ -217,14 +220,18 @@ function Calculator({ detail, pinned }: { detail: TemplateDetail; pinned: boolea
       </div>
 
       <Section id="charts-heading" title="Sensitivity" className="mt-6 print:hidden">
+        <div ref={chartsRef}>
         <Suspense fallback={<p role="status" className="text-sm text-ink-700">Loading the charts…</p>}>
-          {inputsValid && live.settledValid ? (
+          {!chartsNear ? (
+            <p className="text-sm text-ink-700">The sweep and sensitivity charts load when you scroll to them.</p>
+          ) : inputsValid && live.settledValid ? (
             <ChartsPanel slug={detail.slug} version={detail.version} inputs={live.settledInputs} system={system}
               specInputs={spec.inputs} results={chartResults} />
           ) : (
             <p className="text-sm text-ink-700">Correct the marked input to draw the charts.</p>
           )}
         </Suspense>
+        </div>
       </Section>
 
       <Section id="references-heading" title="Reference cases" className="mt-6 print:hidden">
