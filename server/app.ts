@@ -1,3 +1,4 @@
+import compression from 'compression';
 import express from 'express';
 import type { Logger } from 'pino';
 import type { DatabaseHandle } from './db/database';
@@ -32,6 +33,8 @@ export function createApp(options: AppOptions): express.Express {
   app.set('trust proxy', options.trustProxy ?? false);
 
   app.use(securityHeaders());
+  // Bundles, validator scripts and solve results shrink to a third or less with gzip.
+  app.use(compression());
   app.use(requestLogging(logger));
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
 

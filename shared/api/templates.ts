@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { sweepOutputSchema, sweepRequestSchema, tornadoOutputSchema, tornadoRequestSchema } from '../mechanics/sensitivity';
+import { sweepOutputSchema, sweepRequestSchema, tornadoOutputSchema, tornadoRequestSchema } from '../mechanics/sensitivity-schema';
 import { solveResultSchema } from '../mechanics/solve-result';
 import { categorySchema, templateSpecSchema } from '../spec/template-spec';
 import { quantitySchema } from '../units/quantities';

@@ -11,7 +11,8 @@ import {
 import { thumbnailSvg } from '../../../shared/drawing/thumbnail';
 import type { CompiledTemplate } from '../../../shared/mechanics/compile-template';
 import { EngineError, type EngineErrorInfo } from '../../../shared/mechanics/errors';
-import { sweep, tornado, type SweepRequest, type TornadoRequest } from '../../../shared/mechanics/sensitivity';
+import { sweep, tornado } from '../../../shared/mechanics/sensitivity';
+import type { SweepRequest, TornadoRequest } from '../../../shared/mechanics/sensitivity-schema';
 import { prepare, solve } from '../../../shared/mechanics/solve';
 import { inputJsonSchema } from '../../../shared/spec/input-schema';
 import type { TemplateSpec } from '../../../shared/spec/template-spec';
