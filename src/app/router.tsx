@@ -1,5 +1,9 @@
 import { createBrowserRouter, Navigate, Outlet, RouterProvider, ScrollRestoration } from 'react-router-dom';
 import { AppShell } from '../components/app-shell';
+import { useMe } from '../features/auth/api/get-me';
+import { AccountMenu } from '../features/auth/components/account-menu';
+import { accountRoutes } from './account-routes';
+import { roleNavItems } from './role-nav';
 import { HomeRoute } from './routes/home';
 import { HowItWorksRoute } from './routes/how-it-works';
 import { LibraryRoute } from './routes/library';
@@ -7,8 +11,9 @@ import { NotFoundRoute } from './routes/not-found';
 import { RouteErrorBoundary } from './routes/route-error';
 
 function RootLayout() {
+  const me = useMe();
   return (
-    <AppShell>
+    <AppShell roleNavItems={roleNavItems(me.data)} account={<AccountMenu />}>
       <Outlet />
       <ScrollRestoration />
     </AppShell>
@@ -31,6 +36,7 @@ export const router = createBrowserRouter([
       // The library's first address, kept so old links still arrive.
       { path: 'library', element: <Navigate to="/templates" replace /> },
       { path: 'how-it-works', element: <HowItWorksRoute /> },
+      ...accountRoutes,
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -3,7 +3,7 @@ import { Link, NavLink } from 'react-router-dom';
 import { LogoMark } from './logo';
 import { SafetyNote } from './safety-note';
 
-interface NavItem {
+export interface NavItem {
   to: string;
   label: string;
   soon?: boolean;
@@ -21,7 +21,15 @@ function navClass({ isActive }: { isActive: boolean }): string {
     : `${base} text-ink-100 hover:bg-ink-800 hover:text-paper-50`;
 }
 
-export function AppShell({ children }: { children: ReactNode }) {
+interface AppShellProps {
+  children: ReactNode;
+  /** Items the signed-in person's role may use, after the common ones. */
+  roleNavItems?: NavItem[];
+  /** The header's account corner (who is signed in, or the way in). */
+  account?: ReactNode;
+}
+
+export function AppShell({ children, roleNavItems = [], account }: AppShellProps) {
   return (
     <div className="flex min-h-screen flex-col">
       <a
@@ -38,7 +46,7 @@ export function AppShell({ children }: { children: ReactNode }) {
           </Link>
           <nav aria-label="Main">
             <ul className="flex flex-wrap items-center gap-1">
-              {navItems.map((item) => (
+              {[...navItems, ...roleNavItems].map((item) => (
                 <li key={item.to}>
                   <NavLink to={item.to} className={navClass}>
                     {item.label}
@@ -52,6 +60,7 @@ export function AppShell({ children }: { children: ReactNode }) {
               ))}
             </ul>
           </nav>
+          {account && <div className="flex items-center sm:ml-auto">{account}</div>}
         </div>
       </header>
       <main id="main" tabIndex={-1} className="flex-1 focus:outline-none">

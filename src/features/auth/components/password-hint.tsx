@@ -13,7 +13,7 @@ export function PasswordHint({ password, email }: { password: string; email?: st
             <span key={step} className={`h-1.5 rounded-full ${strength.level >= step ? barColours[strength.level] : 'bg-ink-100'}`} />
           ))}
         </div>
-        <span className="w-20 text-right text-xs font-bold text-ink-800" aria-live="polite">
+        <span className="shrink-0 text-right text-xs font-bold text-ink-800" aria-live="polite">
           {strength.word ? `Strength: ${strength.word}` : ''}
         </span>
       </div>
