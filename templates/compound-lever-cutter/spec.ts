@@ -108,7 +108,7 @@ export const compoundLeverCutter: TemplateSpecInput = {
   references: [
     {
       label: 'Derived example: 200 N per handle, a 400, b 50, c 60, d 15 mm',
-      source: '../shared/REFERENCES.md (compound-lever cutter): Q = P·(a/b)·(c/d) with perpendicular moment arms, P = 200 N → Q = 6400 N; exact here with the jaws closed (links at right angles to the centre line).',
+      source: 'Compound-lever relation (derived, moments about each pivot): Q = P·(a/b)·(c/d) with perpendicular moment arms, P = 200 N → Q = 6400 N; exact here with the jaws closed (links at right angles to the centre line).',
       kind: 'closed-form',
       inputs: { P: 200, gap: 0, a: 400, b: 50, c: 60, d: 15 },
       expect: { Q: 6400, S: 1600, MA: 32 },

@@ -110,7 +110,7 @@ export const fourBarLinkage: TemplateSpecInput = {
   references: [
     {
       label: 'Derived example: ground 300, crank 100, coupler 250, rocker 200 mm, θ2 = 60°',
-      source: '../shared/REFERENCES.md (four-bar): Freudenstein, Trans. ASME 77 (1955) 853–861, in the form of R. L. Norton, Design of Machinery, 2nd ed. (McGraw-Hill 1999); open branch → θ4 = 97.56°, μ = 71.03°, torque ratio 3.429 (rounded as printed there).',
+      source: 'Derived example after Freudenstein, Trans. ASME 77 (1955) 853–861, in the form of R. L. Norton, Design of Machinery, 2nd ed. (McGraw-Hill 1999); open branch → θ4 = 97.56°, μ = 71.03°, torque ratio 3.429 (rounded as printed there).',
       kind: 'closed-form',
       inputs: { d: 300, a: 100, b: 250, c: 200, theta2: 60, T2: 10000, branch: 1 },
       expect: { theta4: 97.56, mu: 71.03, ratio: 3.429 },

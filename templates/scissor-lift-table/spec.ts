@@ -124,7 +124,7 @@ export const scissorLiftTable: TemplateSpecInput = {
   references: [
     {
       label: 'Spackman relation, one stage: W = 10 kN, arms 2 kN, L = 1.5 m, θ = 15°',
-      source: 'Virtual work (H. M. Spackman, NOSC TD 1550, 1989, source seen per ../shared/REFERENCES.md): F = (W + W_arms/2) L cos θ · c/(a b sin θ), a = 0.5, b = 1.2 m, c = 0.7286 m; n = 1 gives half the two-stage 1.496e5 N: 74 779.4 N.',
+      source: 'Virtual work (H. M. Spackman, NOSC TD 1550, 1989, relation as given there): F = (W + W_arms/2) L cos θ · c/(a b sin θ), a = 0.5, b = 1.2 m, c = 0.7286 m; n = 1 gives half the two-stage 1.496e5 N: 74 779.4 N.',
       kind: 'closed-form',
       inputs: { m: 10000 / 9.80665, mp: 0, mArm: 1000 / 9.80665, L: 1500, theta: 15, a: 500, b: 1200 },
       expect: { F: 74779.42, c: 728.6213 },

@@ -93,7 +93,7 @@ export const scissorLiftingTongs: TemplateSpecInput = {
   references: [
     {
       label: 'Derived example: W = 10 kN, eye (0.20, 0.30) m, jaw (0.15, 0.20) m, links at 45°',
-      source: '../shared/REFERENCES.md, friction-grip tongs (derived): N = (W/2)(a_x + b_x + a_y tan φ)/b_y = 1.625e4 N, μ = W/(2N) = 0.3077; re-derived in README.md; pin force N + (W/2) tan φ, link (W/2)/cos φ.',
+      source: 'Friction-grip tongs, moments about the centre pin (derived): N = (W/2)(a_x + b_x + a_y tan φ)/b_y = 1.625e4 N, μ = W/(2N) = 0.3077; re-derived in README.md; pin force N + (W/2) tan φ, link (W/2)/cos φ.',
       kind: 'closed-form',
       inputs: {
         m: 10000 / 9.80665,

@@ -74,7 +74,7 @@ export const wallJibTieRod: TemplateSpecInput = {
   references: [
     {
       label: 'Worked example: 20 kN at 3.5 m on a 4 m boom',
-      source: 'Derived by moments about the boom pin, ../shared/REFERENCES.md (wall jib): W = 20 kN at a = 3.5 m, boom 2 kN, L = b = 4.0 m, h = 1.5 m gives T = 52.69 kN, boom compression 49.33 kN, vertical pin force 3.500 kN.',
+      source: 'Derived by moments about the boom pin: W = 20 kN at a = 3.5 m, boom 2 kN, L = b = 4.0 m, h = 1.5 m gives T = 52.69 kN, boom compression 49.33 kN, vertical pin force 3.500 kN.',
       kind: 'closed-form',
       inputs: { m: 20000 / 9.80665, mb: 2000 / 9.80665, L: 4000, h: 1500, tieAt: 100, trolley: 87.5 },
       expect: { T: 52690, C: 49330, V: 3500 },
