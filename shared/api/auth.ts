@@ -255,8 +255,8 @@ export const acceptInvitationResponseSchema = z.object({
 // ---------------------------------------------------------------- administration (role admin)
 
 export const pageQuerySchema = z.object({
-  page: z.coerce.number().int().min(1, 'must be 1 or more').default(1),
-  pageSize: z.coerce.number().int().min(1, 'must be 1 or more').max(100, 'must be at most 100').default(20),
+  page: z.coerce.number<string | number>().int().min(1, 'must be 1 or more').default(1),
+  pageSize: z.coerce.number<string | number>().int().min(1, 'must be 1 or more').max(100, 'must be at most 100').default(20),
 });
 
 export const adminUserSchema = z.object({
