@@ -8,6 +8,7 @@ import { securityHeaders } from './middleware/security-headers';
 import { serveClient } from './middleware/serve-client';
 import { healthRouter } from './routes/health';
 import { templateRoutes } from './routes/templates';
+import { createAccountSystem, type AccountSystemOptions } from './services/auth/account-system';
 import { TemplateCatalogue } from './services/templates/catalogue';
 import { TemplateStore } from './services/templates/template-store';
 import { appVersion } from './version';
@@ -22,6 +23,8 @@ export interface AppOptions {
   version?: string;
   /** Express's `trust proxy` setting; off unless the operator names the proxies. */
   trustProxy?: boolean | number | string;
+  /** Sign-in, sessions, mail and administration; tests default to mode 'test'. */
+  accounts?: Partial<AccountSystemOptions>;
 }
 
 /** Builds the whole HTTP app without listening, so tests drive it through supertest. */
@@ -36,11 +39,16 @@ export function createApp(options: AppOptions): express.Express {
   // Bundles, validator scripts and solve results shrink to a third or less with gzip.
   app.use(compression());
   app.use(requestLogging(logger));
+  const accountSystem = createAccountSystem(database.db, logger, { mode: 'test', ...options.accounts });
+  app.locals.accountSystem = accountSystem;
+  // Before express.json: the auth routes parse their own bodies.
+  app.use('/api/auth', accountSystem.authRouter);
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
 
   const api = express.Router();
   api.use(healthRouter(database, options.version ?? appVersion));
   api.use(templateRoutes(new TemplateCatalogue(new TemplateStore(database.db))));
+  api.use(accountSystem.apiRouter);
   api.use(apiNotFound);
   app.use('/api', api);
 
