@@ -61,6 +61,10 @@ async function main(): Promise<void> {
   const startupMs = Math.round(performance.now());
   logger.info({ url: running.url, startupMs }, 'listening');
   process.stdout.write(`Pinwork is running at ${running.url} (ready in ${startupMs} ms)\n`);
+  if (running.demoAccounts.length) {
+    const lines = running.demoAccounts.map((a) => `  ${a.role.padEnd(9)} ${a.email.padEnd(36)} ${a.password}   (${a.name})`);
+    process.stdout.write(`Demo accounts (development only):\n${lines.join('\n')}\n`);
+  }
   if (stopRequested) stop(running, stopRequested);
 }
 

@@ -8,9 +8,12 @@ import { MEMORY_DATA_DIR, openDatabase } from './db/client';
 import { lockDataFolder, type DataFolderLock } from './db/data-folder-lock';
 import type { DatabaseHandle } from './db/database';
 import { seedDemoData } from './db/seed';
+import { seedDemoAccounts, type DemoAccount } from './db/seed-demo-accounts';
 import { seedBuiltInTemplates } from './db/seed-templates';
 import { builtInTemplates } from '../templates/registry';
 import { recordAudit } from './services/audit';
+import { authSecretFor } from './services/auth/secret';
+import { startMailDelivery, type MailDelivery } from './services/mail/mail-delivery';
 import { appVersion } from './version';
 
 // Long enough for any real request; a client that holds a connection open longer is cut off.
@@ -19,6 +22,8 @@ const DRAIN_TIMEOUT_MS = 10_000;
 export interface RunningServer {
   url: string;
   port: number;
+  /** Development only: the seeded demo sign-ins, for the start message. */
+  demoAccounts: DemoAccount[];
   /** Stops accepting, lets in-flight requests finish, then closes the database and the lock. */
   stop(reason: string): Promise<void>;
 }
@@ -35,6 +40,7 @@ export async function startServer(
     : null;
 
   let database: DatabaseHandle | null = null;
+  let mail: MailDelivery | null = null;
   try {
     database = await openDatabase({
       databaseUrl: config.databaseUrl,
@@ -52,11 +58,26 @@ export async function startServer(
       details: { version: appVersion, driver: database.driver, pid: process.pid },
     });
 
+    const demoAccounts = config.mode === 'development' ? (await seedDemoAccounts(database.db)).accounts : [];
+    mail = await startMailDelivery(database.db, logger, config);
+
+    let listeningUrl = '';
     const app = createApp({
       database,
       logger,
       clientDir: config.clientDir,
       trustProxy: config.trustProxy,
+      accounts: {
+        mode: config.mode,
+        secret: authSecretFor(config),
+        publicUrl: () => config.publicUrl ?? (listeningUrl || (config.port ? `http://localhost:${config.port}` : '')),
+        // The Vite dev and preview servers proxy /api here from their own origins.
+        trustedOrigins: [
+          ...config.trustedOrigins,
+          ...(config.mode === 'production' ? [] : ['http://localhost:5173', 'http://127.0.0.1:5173', 'http://localhost:4173']),
+        ],
+        mailQueue: mail.queue,
+      },
     });
     const server = http.createServer(app);
     server.listen(config.port, config.host);
@@ -64,6 +85,8 @@ export async function startServer(
     const port = (server.address() as AddressInfo).port;
     const shownHost = !config.host || config.host === '0.0.0.0' || config.host === '::' ? 'localhost' : config.host;
     const url = `http://${shownHost}:${port}`;
+    listeningUrl = url;
+    const openMail = mail;
 
     const openDb = database;
     let stopping: Promise<void> | null = null;
@@ -82,14 +105,16 @@ export async function startServer(
           action: 'server.stop',
           details: { version: appVersion, reason, pid: process.pid },
         }).catch((error: unknown) => logger.error({ err: error }, 'could not record the stop'));
+        await openMail.stop().catch((error: unknown) => logger.error({ err: error }, 'could not stop the mail worker'));
         await openDb.close();
         await lock?.release();
         logger.info('stopped cleanly');
       })();
       return stopping;
     };
-    return { url, port, stop };
+    return { url, port, demoAccounts, stop };
   } catch (error) {
+    await mail?.stop().catch(() => undefined);
     await database?.close().catch(() => undefined);
     await lock?.release().catch(() => undefined);
     throw error;

@@ -29,7 +29,9 @@ export interface AuthSettings {
 }
 
 export function createBetterAuth(db: Database, mail: MailQueue, logger: Logger, settings: AuthSettings) {
-  const publicUrl = settings.publicUrl();
+  // Unknown until the server listens when PORT=0: the library then reads it from each request,
+  // whose URL our front router builds from publicUrl().
+  const publicUrl = settings.publicUrl() || undefined;
   return betterAuth({
     appName: 'Pinwork',
     baseURL: publicUrl,
@@ -116,5 +118,6 @@ export function createBetterAuth(db: Database, mail: MailQueue, logger: Logger, 
 export type PinworkAuth = ReturnType<typeof createBetterAuth>;
 
 export function allowedOrigins(settings: Pick<AuthSettings, 'publicUrl' | 'trustedOrigins'>): string[] {
-  return [...new Set([new URL(settings.publicUrl()).origin, ...settings.trustedOrigins.map((o) => new URL(o).origin)])];
+  const own = settings.publicUrl();
+  return [...new Set([...(own ? [new URL(own).origin] : []), ...settings.trustedOrigins.map((o) => new URL(o).origin)])];
 }
