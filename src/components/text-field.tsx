@@ -26,12 +26,12 @@ export function TextField({ label, error, hint, ...input }: TextFieldProps) {
         className={`${inputClass} mt-1.5`}
         {...input}
       />
+      {error && <FieldError id={errorId}>{error}</FieldError>}
       {hint && (
         <div id={hintId} className="mt-1.5 text-sm text-ink-700">
           {hint}
         </div>
       )}
-      {error && <FieldError id={errorId}>{error}</FieldError>}
     </div>
   );
 }

@@ -143,14 +143,14 @@ export function AuditTable() {
                 {audit.data.items.map((e) => (
                   <tr key={e.id} className={rowClass} data-audit-action={e.action}>
                     <td className={`${tdClass} whitespace-nowrap`}>{formatDateTime(e.at)}</td>
-                    <td className={`${tdClass} break-all`}>
+                    <td className={`${tdClass} wrap-anywhere`}>
                       {e.actorEmail ?? e.actorId ?? '—'}
                       <span className="block text-xs text-ink-700">{e.actorKind === 'api_key' ? 'API key' : e.actorKind}</span>
                     </td>
                     <td className={tdClass}>
                       <code className="rounded bg-paper-200 px-1.5 py-0.5 text-xs font-semibold">{e.action}</code>
                     </td>
-                    <td className={`${tdClass} break-all`}>{e.target ?? '—'}</td>
+                    <td className={`${tdClass} wrap-anywhere`}>{e.target ?? '—'}</td>
                     <td className={`${tdClass} whitespace-nowrap tabular-nums`}>{e.ip ?? '—'}</td>
                     <td className={`${tdClass} max-w-[20rem] break-words text-xs text-ink-800`}>{details(e.details)}</td>
                   </tr>

@@ -22,9 +22,9 @@ export function MailViewer({ mailId }: { mailId: number }) {
         </h2>
         <dl className="grid grid-cols-[4.5rem_1fr] gap-x-3 gap-y-0.5 text-sm">
           <dt className="font-bold text-ink-700">To</dt>
-          <dd className="break-all" data-mail-to>{m.to}</dd>
+          <dd className="wrap-anywhere" data-mail-to>{m.to}</dd>
           <dt className="font-bold text-ink-700">From</dt>
-          <dd className="break-all">{m.from}</dd>
+          <dd className="wrap-anywhere">{m.from}</dd>
           <dt className="font-bold text-ink-700">Received</dt>
           <dd>{formatDateTime(m.receivedAt)}</dd>
         </dl>
@@ -37,7 +37,7 @@ export function MailViewer({ mailId }: { mailId: number }) {
           <ul className="mt-1 grid gap-1 text-sm">
             {links.map((url) => (
               <li key={url}>
-                <a href={url} className="font-semibold break-all text-ink-700 underline underline-offset-2 hover:text-ink-950" data-mail-link>
+                <a href={url} className="font-semibold wrap-anywhere text-ink-700 underline underline-offset-2 hover:text-ink-950" data-mail-link>
                   {url}
                 </a>
               </li>

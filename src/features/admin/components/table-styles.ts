@@ -1,6 +1,6 @@
-export const tableWrapClass = 'overflow-x-auto rounded-xl border border-ink-100 bg-paper-50';
+export const tableWrapClass = 'relative overflow-x-auto rounded-xl border border-ink-100 bg-paper-50';
 export const tableClass = 'w-full border-collapse text-sm';
 export const theadClass = 'border-b border-ink-200 bg-paper-200/60 text-left text-ink-800';
 export const thClass = 'px-3 py-2.5 text-left font-bold';
-export const tdClass = 'px-3 py-2.5 align-top';
+export const tdClass = 'px-3 py-2.5 align-middle';
 export const rowClass = 'border-b border-ink-100 last:border-b-0';

@@ -33,7 +33,7 @@ function readQuery(params: URLSearchParams): Required<Pick<AdminUserQuery, 'sort
 }
 
 function StatusTag({ user }: { user: AdminUser }) {
-  if (user.disabled) return <span className="inline-flex items-center gap-1 rounded-full bg-verdict-fail/10 px-2 py-0.5 text-xs font-bold text-verdict-fail">⦸ Disabled</span>;
+  if (user.disabled) return <span className="inline-flex items-center gap-1 rounded-full bg-verdict-fail/10 px-2 py-0.5 text-xs font-bold text-verdict-fail">✕ Disabled</span>;
   if (!user.emailVerified) return <span className="inline-flex items-center gap-1 rounded-full bg-verdict-warn/10 px-2 py-0.5 text-xs font-bold text-verdict-warn">… Not confirmed</span>;
   return <span className="inline-flex items-center gap-1 rounded-full bg-verdict-pass/10 px-2 py-0.5 text-xs font-bold text-verdict-pass">✓ Active</span>;
 }
@@ -156,7 +156,7 @@ export function UsersTable({ currentUserId }: { currentUserId: string }) {
                         {u.name}
                         {self && <span className="ml-1 font-semibold text-ink-700">(you)</span>}
                       </td>
-                      <td className={`${tdClass} break-all`}>{u.email}</td>
+                      <td className={`${tdClass} wrap-anywhere`}>{u.email}</td>
                       <td className={tdClass}>
                         <label className="sr-only" htmlFor={`role-${u.id}`}>
                           Role of {u.name}

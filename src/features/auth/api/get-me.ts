@@ -4,8 +4,14 @@ import { ApiError, apiRequest } from '../../../lib/api-client';
 
 export type { MeResponse };
 
-/** The signed-in user, or null when nobody is signed in (the server answers 401). */
+/**
+ * The signed-in user, or null when nobody is signed in. The auth library's own session probe
+ * answers a visitor with 200 and `null`, so a visitor's every page load does not log a failed
+ * request in the console the way a 401 from /api/me would; /api/me follows only for a session.
+ */
 export async function getMe(signal?: AbortSignal): Promise<MeResponse | null> {
+  const session = await apiRequest<unknown>('/api/auth/get-session', { signal });
+  if (session === null || session === undefined) return null;
   try {
     return await apiRequest('/api/me', { schema: meResponseSchema, signal });
   } catch (error) {

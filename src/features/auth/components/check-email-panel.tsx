@@ -35,7 +35,7 @@ export function CheckEmailPanel({ email: initialEmail }: { email: string }) {
         <p className="leading-relaxed text-ink-900">
           {initialEmail ? (
             <>
-              We have sent a message to <strong className="break-all">{initialEmail}</strong>.
+              We have sent a message to <strong className="wrap-anywhere">{initialEmail}</strong>.
             </>
           ) : (
             'We have sent you a message.'

@@ -45,7 +45,7 @@ export function AcceptInvitation({ token, signedInEmail, onAccepted }: Props) {
           You are invited to join <strong>{inv.organisation.name}</strong> as {inv.role === 'owner' ? 'an owner' : 'a member'}.
         </p>
         <p className="mt-1 text-sm text-ink-700">
-          The invitation is for <strong className="break-all">{inv.email}</strong> and is open until {formatDateTime(inv.expiresAt)}.
+          The invitation is for <strong className="wrap-anywhere">{inv.email}</strong> and is open until {formatDateTime(inv.expiresAt)}.
         </p>
       </div>
       {accept.isError && <Notice tone="error" title="Not accepted">{formErrorsFrom(accept.error).summary}</Notice>}
@@ -67,7 +67,7 @@ export function AcceptInvitation({ token, signedInEmail, onAccepted }: Props) {
         </button>
       ) : (
         <Notice tone="error" title="Signed in with another address">
-          You are signed in as <strong className="break-all">{signedInEmail}</strong>, but this invitation is for {inv.email}. Sign out and sign in as{' '}
+          You are signed in as <strong className="wrap-anywhere">{signedInEmail}</strong>, but this invitation is for {inv.email}. Sign out and sign in as{' '}
           {inv.email} to accept it. <Link to="/account" className={linkClass}>Your account</Link>
         </Notice>
       )}

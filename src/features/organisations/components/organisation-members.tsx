@@ -60,7 +60,7 @@ export function OrganisationMembers({ organisationId, currentUserId, canManage }
                   {m.userId === currentUserId && <span className="text-sm font-semibold text-ink-700">(you)</span>}
                   <RoleTag role={m.role} />
                 </p>
-                <p className="break-all text-sm text-ink-700">
+                <p className="wrap-anywhere text-sm text-ink-700">
                   {m.email} · joined {formatDateTime(m.joinedAt)}
                 </p>
               </div>
@@ -90,7 +90,7 @@ export function OrganisationMembers({ organisationId, currentUserId, canManage }
             {invitations.map((inv) => (
               <li key={inv.id} className="flex flex-wrap items-center justify-between gap-3 py-3" data-invitation={inv.email}>
                 <div className="min-w-0">
-                  <p className="flex flex-wrap items-center gap-2 font-bold break-all text-ink-950">
+                  <p className="flex flex-wrap items-center gap-2 font-bold wrap-anywhere text-ink-950">
                     {inv.email} <RoleTag role={inv.role} />
                   </p>
                   <p className="text-sm text-ink-700">
