@@ -13,6 +13,7 @@ import { problemTypes, type Problem } from '../../shared/api/problem';
 import type { Database } from '../db/database';
 import { apiNotFound } from '../middleware/error-handler';
 import { HttpProblem } from '../middleware/http-problem';
+import { requireTrustedOrigin } from '../middleware/origin-check';
 import { parseOrThrow } from '../middleware/validate';
 import { sessionOf } from '../middleware/auth-guards';
 import type { AccountService } from '../services/accounts';
@@ -28,6 +29,8 @@ export interface AuthFrontOptions {
   accounts: AccountService;
   publicUrl: () => string;
   limits: AuthRateLimits;
+  /** Origins whose pages may send changes (our own, the dev servers). */
+  origins: () => readonly string[];
 }
 
 interface AuthAnswer {
@@ -64,6 +67,8 @@ export function authFrontRouter(options: AuthFrontOptions) {
   const { auth, db, accounts } = options;
   const router = express.Router();
   const limit = authLimiters(db, options.limits);
+  // Our own Origin check first: the library's does not cover every endpoint (sign-out).
+  router.use(requireTrustedOrigin(options.origins));
   router.use(express.json({ limit: '16kb' }));
 
   async function callAuth(req: Request, body?: unknown, search?: URLSearchParams): Promise<AuthAnswer> {

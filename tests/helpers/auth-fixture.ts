@@ -4,6 +4,7 @@ import request from 'supertest';
 import { expect } from 'vitest';
 import type { AppOptions } from '../../server/app';
 import type { DatabaseHandle } from '../../server/db/database';
+import type { AuthRateLimits } from '../../server/routes/auth-rate-limits';
 import { users } from '../../server/db/schema/auth';
 import { mailQueue } from '../../server/db/schema/mail';
 import type { AccountSystem } from '../../server/services/auth/account-system';
@@ -17,8 +18,17 @@ export interface AuthTestApp {
   system: AccountSystem;
 }
 
+const roomy = { limit: 10_000, windowMs: 60_000 };
+/** Limits no functional test reaches; the rate-limit tests set tight ones of their own. */
+export const roomyRateLimits: AuthRateLimits = {
+  signIn: { perIp: roomy, perAccount: roomy },
+  signUp: { perIp: roomy, perAccount: roomy },
+  passwordReset: { perIp: roomy, perAccount: roomy },
+  verification: { perIp: roomy, perAccount: roomy },
+};
+
 export function authApp(database: DatabaseHandle, accounts: AppOptions['accounts'] = {}, options: Partial<AppOptions> = {}): AuthTestApp {
-  const app = appFor(database, { ...options, accounts: { publicUrl: () => PUBLIC_URL, ...accounts } });
+  const app = appFor(database, { ...options, accounts: { publicUrl: () => PUBLIC_URL, rateLimits: roomyRateLimits, ...accounts } });
   return { app, system: app.locals.accountSystem as AccountSystem };
 }
 

@@ -51,14 +51,15 @@ export function createAccountSystem(db: Database, logger: Logger, options: Accou
   const accounts = new AccountService(db, auth);
   const organisations = new OrganisationService(db, mailQueue, publicUrl);
   const rateLimits = { ...defaultAuthRateLimits, ...options.rateLimits };
+  const origins = () => allowedOrigins({ publicUrl, trustedOrigins });
   return {
     auth,
     mailQueue,
     accounts,
-    authRouter: authFrontRouter({ auth, db, accounts, publicUrl, limits: rateLimits }),
+    authRouter: authFrontRouter({ auth, db, accounts, publicUrl, limits: rateLimits, origins }),
     apiRouter: accessControlledRouter(
       accountHandlers({ accounts, organisations, auditLog: new AuditLogService(db), devMail: new DevMailService(db) }),
-      { auth, db, mode: options.mode, origins: () => allowedOrigins({ publicUrl, trustedOrigins }) },
+      { auth, db, mode: options.mode, origins },
     ),
   };
 }
