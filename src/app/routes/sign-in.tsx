@@ -1,8 +1,10 @@
+import { useEffect } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { linkClass } from '../../components/form-styles';
 import { NarrowPage } from '../../components/narrow-page';
 import { Notice } from '../../components/notice';
 import { useMe } from '../../features/auth/api/get-me';
+import { useForgetSession } from '../../features/auth/api/sign-out';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { safeNext } from './safe-next';
 
@@ -11,6 +13,12 @@ export function SignInRoute() {
   const navigate = useNavigate();
   const me = useMe();
   const next = safeNext(params.get('next'));
+  const signedOut = params.get('signedOut') !== null;
+  const forgetSession = useForgetSession();
+  // The sign-out button lands here; only now, outside every guarded page, is the session forgotten.
+  useEffect(() => {
+    if (signedOut) void forgetSession();
+  }, [signedOut]);
   return (
     <NarrowPage
       title="Sign in"
@@ -21,9 +29,10 @@ export function SignInRoute() {
       }
     >
       <div className="grid gap-5">
-        {params.get('signedOut') && !me.data && <Notice tone="success">You are signed out.</Notice>}
+        {signedOut && me.isFetching && <p role="status" className="text-sm text-ink-700">Signing out…</p>}
+        {signedOut && !me.data && !me.isFetching && <Notice tone="success">You are signed out.</Notice>}
         {next && !me.data && <Notice>Sign in to open that page.</Notice>}
-        {me.data ? (
+        {signedOut && me.isFetching ? null : me.data ? (
           <Notice title={`You are signed in as ${me.data.user.email}`}>
             <Link to={next ?? me.data.home} className={linkClass}>
               Continue

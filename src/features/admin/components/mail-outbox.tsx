@@ -37,7 +37,7 @@ export function MailOutbox() {
   }
 
   return (
-    <div className="grid gap-6 lg:grid-cols-[22rem_1fr]">
+    <div className="grid gap-6 lg:grid-cols-[22rem_minmax(0,1fr)]">
       <section aria-labelledby="outbox-list-heading" className="grid content-start gap-3">
         <h2 id="outbox-list-heading" className="sr-only">
           Received messages

@@ -66,7 +66,7 @@ export function MailViewer({ mailId }: { mailId: number }) {
           Text part
         </h3>
         {m.text ? (
-          <pre className="mt-2 max-h-[24rem] overflow-auto rounded-xl border border-ink-200 bg-paper-100 p-4 text-sm leading-relaxed break-words whitespace-pre-wrap text-ink-950" data-mail-text>
+          <pre className="mt-2 max-h-[24rem] overflow-auto rounded-xl border border-ink-200 bg-paper-100 p-4 text-sm leading-relaxed wrap-anywhere whitespace-pre-wrap text-ink-950" data-mail-text>
             {m.text}
           </pre>
         ) : (

@@ -27,12 +27,14 @@ export function AccountMenu() {
   const { user } = me.data;
   return (
     <div className="flex items-center gap-2" data-signed-in-role={user.role}>
-      <Link to="/account" className="flex min-w-0 items-center gap-2 rounded-md px-2 py-1.5 hover:bg-ink-800" aria-label={`Your account: ${user.name}, ${roleLabels[user.role]}`}>
+      <Link to="/account" className="flex min-w-0 items-center gap-2 rounded-md px-2 py-1.5 hover:bg-ink-800">
+        <span className="sr-only">Your account: </span>
         <span aria-hidden="true" className="inline-flex size-8 shrink-0 items-center justify-center rounded-full bg-ink-600 text-sm font-extrabold text-paper-50">
           {user.name.trim().charAt(0).toUpperCase() || '?'}
         </span>
         <span className="flex min-w-0 flex-col leading-tight">
           <span className="max-w-[10rem] truncate text-sm font-bold text-paper-50">{user.name}</span>
+          <span className="sr-only">, signed in as </span>
           <span className="text-xs font-semibold text-ink-200">{roleLabels[user.role]}</span>
         </span>
       </Link>
