@@ -205,7 +205,15 @@ export function authFrontRouter(options: AuthFrontOptions) {
     res.setHeader('Cache-Control', 'no-store');
     res.status(answer.status).json(answer.body);
   };
-  router.get('/get-session', passThrough);
+  // The session answer is read by page scripts: it must not carry the session token, which the
+  // httpOnly cookie exists to keep away from JavaScript.
+  router.get('/get-session', async (req, res) => {
+    const answer = await callAuth(req, undefined, new URL(req.originalUrl, 'http://x').searchParams);
+    if (answer.status >= 400) throw libraryProblem(answer);
+    forwardCookies(answer, res);
+    res.setHeader('Cache-Control', 'no-store');
+    res.status(answer.status).json(withoutSessionToken(answer.body));
+  });
   router.post('/change-password', passThrough);
   router.post('/update-user', passThrough);
 
@@ -224,4 +232,13 @@ function emailInToken(token: string): string {
   } catch {
     return '';
   }
+}
+
+/** A session answer with its `session.token` removed; anything else unchanged. */
+export function withoutSessionToken(body: unknown): unknown {
+  if (!body || typeof body !== 'object' || !('session' in body)) return body;
+  const { session, ...rest } = body as { session: unknown };
+  if (!session || typeof session !== 'object') return body;
+  const { token: _token, ...safeSession } = session as Record<string, unknown>;
+  return { ...rest, session: safeSession };
 }

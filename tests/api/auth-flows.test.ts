@@ -302,3 +302,18 @@ describe('production cookies', () => {
     expect(cookie).toMatch(/HttpOnly/);
   });
 });
+
+describe('the session answer page scripts read', () => {
+  it('names the user but never carries the session token the httpOnly cookie protects', async () => {
+    const email = uniqueEmail('session-token');
+    await signUpVerified(t, database, email);
+    const agent = await signedInAgent(t, email);
+    const res = await agent.get('/api/auth/get-session');
+    expect(res.status).toBe(200);
+    expect(res.body.user.email).toBe(email);
+    expect(res.body.session.userId).toBe(res.body.user.id);
+    expect(res.body.session).not.toHaveProperty('token');
+    const [stored] = await database.db.select({ token: sessions.token }).from(sessions).where(eq(sessions.userId, res.body.user.id));
+    expect(JSON.stringify(res.body)).not.toContain(stored!.token);
+  });
+});
