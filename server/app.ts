@@ -8,6 +8,11 @@ import { securityHeaders } from './middleware/security-headers';
 import { serveClient } from './middleware/serve-client';
 import { healthRouter } from './routes/health';
 import { templateRoutes } from './routes/templates';
+import { v1Router, type V1Limits } from './routes/v1';
+import { ApiKeyService } from './services/api-keys/api-keys';
+import { UsageRecorder } from './services/api-keys/usage-recorder';
+import { UsageReportService } from './services/api-keys/usage-report';
+import { V1Catalogue } from './services/api-v1/v1-catalogue';
 import { createAccountSystem, type AccountSystemOptions } from './services/auth/account-system';
 import { TemplateCatalogue } from './services/templates/catalogue';
 import { TemplateStore } from './services/templates/template-store';
@@ -25,6 +30,8 @@ export interface AppOptions {
   trustProxy?: boolean | number | string;
   /** Sign-in, sessions, mail and administration; tests default to mode 'test'. */
   accounts?: Partial<AccountSystemOptions>;
+  /** The public API v1: limits, and how long key rows and quota figures are cached. */
+  apiV1?: { limits?: Partial<V1Limits>; keyCacheMs?: number; flushMs?: number; defaultMonthlyQuota?: number | null };
 }
 
 /** Builds the whole HTTP app without listening, so tests drive it through supertest. */
@@ -39,15 +46,27 @@ export function createApp(options: AppOptions): express.Express {
   // Bundles, validator scripts and solve results shrink to a third or less with gzip.
   app.use(compression());
   app.use(requestLogging(logger));
-  const accountSystem = createAccountSystem(database.db, logger, { mode: 'test', ...options.accounts });
+  const v1 = options.apiV1 ?? {};
+  const apiKeys = new ApiKeyService(database.db, { cacheMs: v1.keyCacheMs });
+  const defaultMonthlyQuota = v1.defaultMonthlyQuota === undefined ? 100_000 : v1.defaultMonthlyQuota;
+  const apiUsage = new UsageRecorder(database.db, logger, { flushMs: v1.flushMs, defaultMonthlyQuota });
+  app.locals.apiUsage = apiUsage;
+  const usageReports = new UsageReportService(database.db, defaultMonthlyQuota);
+  const accountSystem = createAccountSystem(database.db, logger, { mode: 'test', ...options.accounts, apiKeys, usageReports });
   app.locals.accountSystem = accountSystem;
   // Before express.json: the auth routes parse their own bodies.
   app.use('/api/auth', accountSystem.authRouter);
+  // Also before express.json: v1 checks the key first, then parses with its own, tighter limits.
+  const templateStore = new TemplateStore(database.db);
+  app.use(
+    '/api/v1',
+    v1Router({ db: database.db, logger, keys: apiKeys, usage: apiUsage, catalogue: new V1Catalogue(templateStore), version: options.version ?? appVersion, limits: v1.limits }),
+  );
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
 
   const api = express.Router();
   api.use(healthRouter(database, options.version ?? appVersion));
-  api.use(templateRoutes(new TemplateCatalogue(new TemplateStore(database.db))));
+  api.use(templateRoutes(new TemplateCatalogue(templateStore)));
   api.use(accountSystem.apiRouter);
   api.use(apiNotFound);
   app.use('/api', api);

@@ -18,6 +18,7 @@ import type { AuditLogService } from '../services/audit-log';
 import type { DevMailService } from '../services/dev-mail';
 import type { OrganisationService } from '../services/organisations';
 import type { RouteHandlers } from './access-router';
+import type { ApiKeyRouteId } from './route-access';
 
 export interface AccountRouteServices {
   accounts: AccountService;
@@ -33,7 +34,7 @@ const auditFilterSchema = auditQuerySchema.omit({ page: true, pageSize: true });
 const actorOf = (req: Parameters<RequestHandler>[0]) => ({ userId: signedIn(req).user.id, ip: req.ip ?? null, headers: req.headers });
 
 /** Thin handlers for the route table: parse, call a service, respond. */
-export function accountHandlers(s: AccountRouteServices): RouteHandlers {
+export function accountHandlers(s: AccountRouteServices): Omit<RouteHandlers, ApiKeyRouteId> {
   return {
     'me.get': async (req, res) => {
       res.setHeader('Cache-Control', 'no-store');

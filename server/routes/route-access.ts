@@ -49,9 +49,22 @@ export const routeTable = [
   { id: 'admin.audit.list', method: 'GET', path: '/admin/audit', access: adminOnly },
   { id: 'admin.audit.csv', method: 'GET', path: '/admin/audit.csv', access: adminOnly },
 
+  { id: 'apiKeys.list', method: 'GET', path: '/organisations/:organisationId/api-keys', access: { kind: 'organisation', orgRole: 'any', param: 'organisationId' } },
+  { id: 'apiKeys.create', method: 'POST', path: '/organisations/:organisationId/api-keys', access: { kind: 'organisation', orgRole: 'owner', param: 'organisationId' } },
+  { id: 'apiKeys.rotate', method: 'POST', path: '/organisations/:organisationId/api-keys/:keyId/rotate', access: { kind: 'organisation', orgRole: 'owner', param: 'organisationId' } },
+  { id: 'apiKeys.revoke', method: 'POST', path: '/organisations/:organisationId/api-keys/:keyId/revoke', access: { kind: 'organisation', orgRole: 'owner', param: 'organisationId' } },
+  { id: 'apiKeys.usage', method: 'GET', path: '/organisations/:organisationId/api-usage', access: { kind: 'organisation', orgRole: 'any', param: 'organisationId' } },
+  { id: 'apiKeys.admin.list', method: 'GET', path: '/admin/api-keys', access: adminOnly },
+  { id: 'apiKeys.admin.create', method: 'POST', path: '/admin/api-keys', access: adminOnly },
+  { id: 'apiKeys.admin.rotate', method: 'POST', path: '/admin/api-keys/:keyId/rotate', access: adminOnly },
+  { id: 'apiKeys.admin.revoke', method: 'POST', path: '/admin/api-keys/:keyId/revoke', access: adminOnly },
+  { id: 'apiKeys.admin.usage', method: 'GET', path: '/admin/api-usage', access: adminOnly },
+
   { id: 'dev.mail.list', method: 'GET', path: '/dev/mail', access: adminOnly, devOnly: true },
   { id: 'dev.mail.get', method: 'GET', path: '/dev/mail/:mailId', access: adminOnly, devOnly: true },
   { id: 'dev.mail.html', method: 'GET', path: '/dev/mail/:mailId/html', access: adminOnly, devOnly: true },
 ] as const satisfies readonly AccessRule[];
 
 export type RouteId = (typeof routeTable)[number]['id'];
+/** The API-key management rows (handled in api-key-handlers.ts). */
+export type ApiKeyRouteId = Extract<RouteId, `apiKeys.${string}`>;

@@ -22,9 +22,8 @@ export const apiKeys = pgTable(
   'api_keys',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    organisationId: uuid('organisation_id')
-      .notNull()
-      .references(() => organisations.id, { onDelete: 'cascade' }),
+    // Null for an admin's own key (not an organisation's).
+    organisationId: uuid('organisation_id').references(() => organisations.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
     prefix: text('prefix').notNull().unique(),
     hash: text('hash').notNull(),
@@ -36,6 +35,10 @@ export const apiKeys = pgTable(
     expiresAt: timestamp('expires_at', { withTimezone: true }),
     revokedAt: timestamp('revoked_at', { withTimezone: true }),
     lastUsedAt: timestamp('last_used_at', { withTimezone: true }),
+    /** Requests a minute for this key; null: the server's default. */
+    ratePerMinute: integer('rate_per_minute'),
+    /** The key this one replaced by rotation (the old one stays valid until its grace ends). */
+    rotatedFromId: uuid('rotated_from_id'),
   },
   (t) => [
     check('api_keys_kind_known', sql`${t.kind} in ('secret', 'publishable')`),
@@ -57,4 +60,16 @@ export const usageCounters = pgTable(
     primaryKey({ name: 'usage_counters_key_endpoint_day_pk', columns: [t.apiKeyId, t.endpoint, t.day] }),
     check('usage_counters_count_non_negative', sql`${t.count} >= 0`),
   ],
+);
+
+// A monthly request quota per organisation for the public API; no row: the server's default.
+export const apiQuotas = pgTable(
+  'api_quotas',
+  {
+    organisationId: uuid('organisation_id')
+      .primaryKey()
+      .references(() => organisations.id, { onDelete: 'cascade' }),
+    monthlyRequests: integer('monthly_requests').notNull(),
+  },
+  (t) => [check('api_quotas_monthly_non_negative', sql`${t.monthlyRequests} >= 0`)],
 );

@@ -4,9 +4,12 @@ import type { ServerMode } from '../../config';
 import type { Database } from '../../db/database';
 import { accessControlledRouter } from '../../routes/access-router';
 import { accountHandlers } from '../../routes/account-handlers';
+import { apiKeyHandlers } from '../../routes/api-key-handlers';
 import { authFrontRouter } from '../../routes/auth-front';
 import { defaultAuthRateLimits, type AuthRateLimits } from '../../routes/auth-rate-limits';
 import { AccountService } from '../accounts';
+import { ApiKeyService } from '../api-keys/api-keys';
+import { UsageReportService } from '../api-keys/usage-report';
 import { AuditLogService } from '../audit-log';
 import { DevMailService } from '../dev-mail';
 import { MailQueue } from '../mail/mail-queue';
@@ -23,6 +26,9 @@ export interface AccountSystemOptions {
   rateLimits?: Partial<AuthRateLimits> | undefined;
   verificationExpiresIn?: number | undefined;
   resetExpiresIn?: number | undefined;
+  /** Shared with the public API so a revocation here is seen there at once. */
+  apiKeys?: ApiKeyService | undefined;
+  usageReports?: UsageReportService | undefined;
 }
 
 export interface AccountSystem {
@@ -58,7 +64,10 @@ export function createAccountSystem(db: Database, logger: Logger, options: Accou
     accounts,
     authRouter: authFrontRouter({ auth, db, accounts, publicUrl, limits: rateLimits, origins }),
     apiRouter: accessControlledRouter(
-      accountHandlers({ accounts, organisations, auditLog: new AuditLogService(db), devMail: new DevMailService(db) }),
+      {
+        ...accountHandlers({ accounts, organisations, auditLog: new AuditLogService(db), devMail: new DevMailService(db) }),
+        ...apiKeyHandlers({ apiKeys: options.apiKeys ?? new ApiKeyService(db), usageReports: options.usageReports ?? new UsageReportService(db, null) }),
+      },
       { auth, db, mode: options.mode, origins },
     ),
   };
