@@ -87,13 +87,13 @@ export function v1Router(deps: V1Deps): express.Router {
     legacyHeaders: false,
     // The key is the identity here, not the address; nothing about req.ip to validate.
     validate: { keyGeneratorIpFallback: false },
-    handler: (req, _res, next, opts) =>
+    handler: (req, _res, next) =>
       next(
         new HttpProblem({
           type: apiProblemTypes.rateLimited,
           title: 'Too many requests',
           status: 429,
-          detail: `Key ${apiKeyOf(req).prefix} has made more than ${typeof opts.limit === 'number' ? opts.limit : 'its limit of'} requests in ${Math.round(limits.windowMs / 1000)} s; wait for Retry-After seconds.`,
+          detail: `Key ${apiKeyOf(req).prefix} has made more than ${apiKeyOf(req).ratePerMinute ?? limits.perWindow} requests in ${Math.round(limits.windowMs / 1000)} s; wait for Retry-After seconds.`,
         }),
       ),
   });
