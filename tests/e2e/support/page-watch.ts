@@ -51,9 +51,13 @@ export async function watchContext(context: BrowserContext): Promise<PageProblem
       if (message.type() === 'error') problems.consoleErrors.push(message.text());
     });
     page.on('pageerror', (error) => problems.pageErrors.push(error.message));
-    page.on('requestfailed', (request) =>
-      problems.failedRequests.push(`${request.method()} ${request.url()}: ${request.failure()?.errorText}`),
-    );
+    page.on('requestfailed', (request) => {
+      const reason = request.failure()?.errorText ?? '';
+      // A fetch the page itself cancels when the visitor moves on (TanStack Query aborts the
+      // queries of the page left behind) is not a failure of the server or the app.
+      if (reason === 'net::ERR_ABORTED' && request.resourceType() === 'fetch') return;
+      problems.failedRequests.push(`${request.method()} ${request.url()}: ${reason}`);
+    });
   };
   context.pages().forEach(attach);
   context.on('page', attach);

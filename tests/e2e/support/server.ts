@@ -57,11 +57,18 @@ export async function startBuiltServer(env: Record<string, string> = {}): Promis
   const port = await freePort();
   // The browser tests use an in-memory database unless a caller asks otherwise, even
   // when the surrounding shell (CI) has DATABASE_URL set for the database suite.
+  // Production mode by default, as a deployment runs; it insists on the settings below.
+  // Test-only values: the secret is throwaway and nothing listens on port 9, so mail is queued
+  // and never sent. Development mode (asked for by the account tests) starts its own mail server.
+  const production = (env.NODE_ENV ?? 'production') === 'production';
   const childEnv: Record<string, string | undefined> = {
     ...process.env,
     NODE_ENV: 'production',
     LOG_LEVEL: 'warn',
     DATA_DIR: 'memory',
+    ...(production
+      ? { AUTH_SECRET: 'browser-tests-only-secret-0123456789abcdef', PUBLIC_URL: `http://localhost:${port}`, SMTP_URL: 'smtp://127.0.0.1:9' }
+      : {}),
     ...env,
     PORT: String(port),
   };
