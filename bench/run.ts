@@ -1,4 +1,5 @@
 import { benchEngine } from './engine';
+import { benchHttp } from './http';
 
 /** `npm run bench`: prints each section's table. Goals are reported, never asserted by tests. */
 function table(rows: string[][]): string {
@@ -14,3 +15,11 @@ console.log('Engine\n');
 const engine = benchEngine();
 console.log(table(engine.rows));
 console.log(`\nEngine goals: ${engine.pass ? 'all met' : 'some missed'}`);
+
+if (!process.argv.includes('--no-http')) {
+  console.log('\nHTTP\n');
+  const http = await benchHttp();
+  console.log(table(http.rows));
+  console.log(`\n${http.note}`);
+  console.log(`HTTP goal (v1 solve ≥ 0.80× the middleware baseline's req/s, p99 ≤ 1.5×): ${http.pass ? 'met' : 'missed'}`);
+}
