@@ -1,3 +1,4 @@
+import { eq } from 'drizzle-orm';
 import express, { type Request, type RequestHandler, type Response } from 'express';
 import { z } from 'zod';
 import {
@@ -11,6 +12,7 @@ import {
 } from '../../shared/api/auth';
 import { problemTypes, type Problem } from '../../shared/api/problem';
 import type { Database } from '../db/database';
+import { users } from '../db/schema/auth';
 import { apiNotFound } from '../middleware/error-handler';
 import { HttpProblem } from '../middleware/http-problem';
 import { requireTrustedOrigin } from '../middleware/origin-check';
@@ -165,14 +167,21 @@ export function authFrontRouter(options: AuthFrontOptions) {
 
   router.get('/verify-email', async (req, res) => {
     const { token } = parseOrThrow(verifyEmailQuerySchema, req.query);
+    // The library's tokens are signed, not stored, so it would accept one twice: a link whose
+    // address is already confirmed counts as used.
+    const email = emailInToken(token);
+    const [already] = email ? await db.select({ verified: users.emailVerified }).from(users).where(eq(users.email, email)) : [];
+    if (already?.verified) throw new HttpProblem(INVALID_LINK);
     const answer = await callAuth(req, undefined, new URLSearchParams({ token }));
     if (answer.status >= 400) {
       if (answer.status === 401 || answer.status === 400) throw new HttpProblem(INVALID_LINK);
       throw libraryProblem(answer);
     }
+    const [user] = await db.select({ id: users.id }).from(users).where(eq(users.email, email));
+    if (user) await recordAudit(db, { actorKind: 'user', actorId: user.id, action: 'auth.email-verified', target: `user:${user.id}`, ip: ipOf(req) });
     forwardCookies(answer, res);
     res.setHeader('Cache-Control', 'no-store');
-    res.json({ status: 'verified', email: emailInToken(token) });
+    res.json({ status: 'verified', email });
   });
 
   const acceptedAlways = (schema: z.ZodType<{ email: string }>, audit?: string): RequestHandler => async (req, res) => {

@@ -105,6 +105,12 @@ describe('e-mail verification', () => {
     expect(user!.emailVerified).toBe(true);
     const signIn = await request(t.app).post('/api/auth/sign-in/email').set('Origin', ORIGIN).send({ email, password: GOOD_PASSWORD });
     expect(signIn.status).toBe(200);
+    // The same link a second time is used up, and the confirmation is in the audit log once.
+    const again = await request(t.app).get('/api/auth/verify-email').query({ token });
+    expect(again.status).toBe(400);
+    expect(problem(again.body).type).toBe('/problems/invalid-link');
+    const entries = await database.db.select().from(auditLog).where(eq(auditLog.action, 'auth.email-verified'));
+    expect(entries.filter((e) => e.actorId === user!.id)).toHaveLength(1);
   });
 
   it('refuses a spoilt token and an expired one as an invalid link', async () => {

@@ -78,9 +78,6 @@ export function createBetterAuth(db: Database, mail: MailQueue, logger: Logger, 
       sendVerificationEmail: async ({ user, token }) => {
         await mail.enqueue(verifyEmailMessage(user.email, user.name, `${settings.publicUrl()}/verify-email?token=${encodeURIComponent(token)}`));
       },
-      afterEmailVerification: async (user) => {
-        await recordAudit(db, { actorKind: 'user', actorId: user.id, action: 'auth.email-verified', target: `user:${user.id}`, ip: currentIp() });
-      },
     },
     databaseHooks: {
       user: {
