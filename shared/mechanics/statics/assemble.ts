@@ -38,17 +38,33 @@ export interface Assembled {
   dy: Float64Array;
 }
 
-export function unitDirection(d: DirectionPlan, env: SolveEnv, what: string, path: (string | number)[]): [number, number] {
+/** x and y of the last direction read by readDirection (one pair, reused: no allocation per call). */
+const dir = { x: 0, y: 0 };
+
+/**
+ * Reads a direction into `dir`. Returns an error message instead of throwing, so the caller
+ * builds the path and the wording only when something is wrong.
+ */
+function readDirection(d: DirectionPlan, env: SolveEnv): string | null {
   if ('angle' in d) {
     const a = (d.angle(env) * Math.PI) / 180;
-    if (!Number.isFinite(a)) throw new EngineError({ kind: 'expression', path, message: `${what}: the direction angle is not a finite number` });
-    return [Math.cos(a), Math.sin(a)];
+    if (!Number.isFinite(a)) return 'the direction angle is not a finite number';
+    dir.x = Math.cos(a);
+    dir.y = Math.sin(a);
+    return null;
   }
   const vx = env.px[d.to]! - env.px[d.from]!;
   const vy = env.py[d.to]! - env.py[d.from]!;
   const l = len(vx, vy);
-  if (!(l > 0)) throw new EngineError({ kind: 'geometry', path, message: `${what}: the two points that give its direction coincide` });
-  return [vx / l, vy / l];
+  if (!(l > 0)) return 'the two points that give its direction coincide';
+  dir.x = vx / l;
+  dir.y = vy / l;
+  return null;
+}
+
+function direction(d: DirectionPlan, env: SolveEnv, what: () => string, path: () => (string | number)[]): void {
+  const problem = readDirection(d, env);
+  if (problem) throw new EngineError({ kind: problem.startsWith('the direction angle') ? 'expression' : 'geometry', path: path(), message: `${what()}: ${problem}` });
 }
 
 export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
@@ -96,9 +112,9 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
   for (let i = 0; i < nj; i++) {
     const j = t.joints[i]!;
     if (j.normal) {
-      const [a, b] = unitDirection(j.normal, env, `joint ${j.id}`, ['joints', i, 'normal']);
-      nx[i] = a;
-      ny[i] = b;
+      direction(j.normal, env, () => `joint ${j.id}`, () => ['joints', i, 'normal']);
+      nx[i] = dir.x;
+      ny[i] = dir.y;
     }
     if (typeof j.friction === 'object') {
       const c = j.friction.coefficient(env);
@@ -143,11 +159,11 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
       continue;
     }
     if (l.unknown) {
-      const [a, c] = unitDirection(l.unknown.direction, env, `load ${l.id}`, ['loads', i, 'force', 'direction']);
-      dx[i] = a;
-      dy[i] = c;
-      ux[l.unknown.column] = a;
-      uy[l.unknown.column] = c;
+      direction(l.unknown.direction, env, () => `load ${l.id}`, () => ['loads', i, 'force', 'direction']);
+      dx[i] = dir.x;
+      dy[i] = dir.y;
+      ux[l.unknown.column] = dir.x;
+      uy[l.unknown.column] = dir.y;
       continue;
     }
     const k = l.known!;
@@ -158,9 +174,9 @@ export function assemble(t: CompiledTemplate, env: SolveEnv): Assembled {
       fy = k.y(env);
     } else {
       const mag = k.magnitude(env);
-      const [a, c] = unitDirection(k.direction, env, `load ${l.id}`, ['loads', i, 'force', 'direction']);
-      fx = mag * a;
-      fy = mag * c;
+      direction(k.direction, env, () => `load ${l.id}`, () => ['loads', i, 'force', 'direction']);
+      fx = mag * dir.x;
+      fy = mag * dir.y;
     }
     if (!Number.isFinite(fx) || !Number.isFinite(fy)) {
       throw new EngineError({ kind: 'expression', path: ['loads', i, 'force'], message: `load ${l.id}: the force is not a finite number` });
