@@ -1,4 +1,4 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, inArray } from 'drizzle-orm';
 import { inputJsonSchema } from '../../shared/spec/input-schema';
 import { templateSpecSchema, type TemplateSpecInput } from '../../shared/spec/template-spec';
 import { validateSpec } from '../../shared/spec/validate-spec';
@@ -29,7 +29,20 @@ const nextMinor = (v: string) => {
 export async function seedBuiltInTemplates(db: Database, specs: readonly TemplateSpecInput[], ownerSlug: string): Promise<TemplateSeedReport> {
   const report = { templates: 0, versions: 0 };
   const [owner] = await db.select({ id: organisations.id }).from(organisations).where(eq(organisations.slug, ownerSlug));
+  // Every start comes through here: one query answers "already stored?" for all built-ins, so a
+  // restart validates, compiles and writes nothing.
+  const stored = new Set(
+    (
+      await db
+        .select({ hash: templateVersions.contentHash })
+        .from(templateVersions)
+        .innerJoin(templates, eq(templates.id, templateVersions.templateId))
+        .where(inArray(templates.slug, specs.map((s) => s.slug)))
+    ).map((r) => r.hash),
+  );
   for (const input of specs) {
+    const parsed = templateSpecSchema.safeParse(input);
+    if (parsed.success && stored.has(contentHash(parsed.data))) continue;
     const checked = validateSpec(input);
     if (!checked.ok) {
       throw new Error(`Built-in template ${input.slug} is not valid: ${checked.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ')}`);
