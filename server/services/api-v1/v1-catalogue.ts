@@ -13,7 +13,7 @@ import type { Quantity } from '../../../shared/units/quantities';
 import { fromDisplay, toDisplay, type UnitSystem } from '../../../shared/units/unit-systems';
 import { HttpProblem } from '../../middleware/http-problem';
 import { engineProblem } from '../templates/catalogue';
-import { compareSemver, type StoredVersion, type TemplateStore } from '../templates/template-store';
+import { compareSemver, latestPerSlug, versionInfo, type StoredVersion, type TemplateStore } from '../templates/template-store';
 
 export interface ResolvedVersion {
   row: StoredVersion;
@@ -88,13 +88,8 @@ export class V1Catalogue {
     if (!this.published || Date.now() - this.published.at >= this.cacheMs) {
       this.published = { at: Date.now(), rows: this.store.publishedVersions() };
     }
-    const latest = new Map<string, StoredVersion>();
-    for (const r of await this.published.rows) {
-      const seen = latest.get(r.slug);
-      if (!seen || compareSemver(r.semver, seen.semver) > 0) latest.set(r.slug, r);
-    }
     return {
-      templates: [...latest.values()].map((row) => ({
+      templates: latestPerSlug(await this.published.rows).map((row) => ({
         slug: row.slug,
         title: row.title,
         summary: row.summary,
@@ -116,7 +111,7 @@ export class V1Catalogue {
       category: spec.category,
       version: row.semver,
       contentHash: row.contentHash,
-      versions: all.map((r) => ({ version: r.semver, status: r.status, publishedAt: r.publishedAt ? r.publishedAt.toISOString() : null, changelog: r.changelog })),
+      versions: all.map(versionInfo),
       inputSchema: inputJsonSchema(spec),
       defaults: Object.fromEntries(compiled.inputs.map((i) => [i.key, i.default])),
       inputs: compiled.inputs.map((i) => ({ key: i.key, label: i.label, quantity: i.quantity })),

@@ -17,7 +17,7 @@ import { prepare, solve } from '../../../shared/mechanics/solve';
 import { inputJsonSchema } from '../../../shared/spec/input-schema';
 import type { TemplateSpec } from '../../../shared/spec/template-spec';
 import { HttpProblem } from '../../middleware/http-problem';
-import { compareSemver, type StoredVersion, type TemplateStore } from './template-store';
+import { compareSemver, latestPerSlug, versionInfo, type StoredVersion, type TemplateStore } from './template-store';
 
 /** A published version ready to serve: its spec compiled once (versions are immutable). */
 interface Loaded {
@@ -94,14 +94,8 @@ export class TemplateCatalogue {
   }
 
   async list(): Promise<TemplateList> {
-    const rows = await this.store.publishedVersions();
-    const latest = new Map<string, StoredVersion>();
-    for (const r of rows) {
-      const seen = latest.get(r.slug);
-      if (!seen || compareSemver(r.semver, seen.semver) > 0) latest.set(r.slug, r);
-    }
     return {
-      templates: [...latest.values()].map((row) => {
+      templates: latestPerSlug(await this.store.publishedVersions()).map((row) => {
         const { spec } = this.load(row);
         return {
           slug: row.slug,
@@ -137,12 +131,7 @@ export class TemplateCatalogue {
       category: spec.category,
       version: row.semver,
       contentHash: row.contentHash,
-      versions: all.map((r) => ({
-        version: r.semver,
-        status: r.status,
-        publishedAt: r.publishedAt ? r.publishedAt.toISOString() : null,
-        changelog: r.changelog,
-      })),
+      versions: all.map(versionInfo),
       spec,
       inputSchema: inputJsonSchema(spec),
       defaults: Object.fromEntries(compiled.inputs.map((i) => [i.key, i.default])),

@@ -50,6 +50,21 @@ export function compareSemver(a: string, b: string): number {
   return pa < pb ? -1 : 1;
 }
 
+/** The newest version of each slug among the given rows, in the order slugs first appear. */
+export function latestPerSlug(rows: readonly StoredVersion[]): StoredVersion[] {
+  const latest = new Map<string, StoredVersion>();
+  for (const r of rows) {
+    const seen = latest.get(r.slug);
+    if (!seen || compareSemver(r.semver, seen.semver) > 0) latest.set(r.slug, r);
+  }
+  return [...latest.values()];
+}
+
+/** A version as the version lists of both APIs show it. */
+export function versionInfo(r: StoredVersion) {
+  return { version: r.semver, status: r.status, publishedAt: r.publishedAt ? r.publishedAt.toISOString() : null, changelog: r.changelog };
+}
+
 /** Data access for templates and their versions; no rules beyond "published" here. */
 export class TemplateStore {
   constructor(private readonly db: Database) {}
