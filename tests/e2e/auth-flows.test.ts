@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { launchBrowser, type TestBrowser } from './support/browser';
+import { expectHeading } from './support/heading';
 import { watchContext, type PageProblems } from './support/page-watch';
 import { artifactsDir } from './support/paths';
 import { startBuiltServer, type RunningServer } from './support/server';
@@ -57,9 +58,6 @@ async function shoot(name: string, fullPage = true) {
   await page.screenshot({ path: join(artifactsDir, `${name}.png`), fullPage });
 }
 
-async function heading(): Promise<string | null> {
-  return page.getByRole('heading', { level: 1 }).textContent();
-}
 
 async function signIn(email: string, password: string) {
   await page.goto(`${base}/sign-in`, { waitUntil: 'networkidle' });
@@ -95,7 +93,7 @@ async function pageOverflow(): Promise<number> {
 describe('accounts in the browser', () => {
   it('refuses a weak password beside the field, then signs up and says where the link went', async () => {
     await page.goto(`${base}/sign-up`, { waitUntil: 'networkidle' });
-    expect(await heading()).toBe('Create an account');
+    await expectHeading(page, 'Create an account');
     await page.getByLabel('Name').fill(person.name);
     await page.getByLabel('E-mail').fill(person.email);
     const password = page.getByLabel('Password', { exact: true });
@@ -112,7 +110,7 @@ describe('accounts in the browser', () => {
     await page.getByRole('button', { name: 'Create the account' }).click();
 
     await page.waitForURL(/\/sign-up\/check-email\?email=/);
-    expect(await heading()).toBe('Check your e-mail');
+    await expectHeading(page, 'Check your e-mail');
     expect(await page.locator('main').textContent()).toContain(person.email);
     await shoot('auth-check-email');
     expect(problems.all()).toEqual([]);
@@ -183,12 +181,12 @@ describe('accounts in the browser', () => {
     expect(await nav.getByRole('link', { name: 'My organisation' }).count()).toBe(0);
 
     await page.goto(`${base}/admin`, { waitUntil: 'networkidle' });
-    expect(await heading()).toBe('Not allowed for your role');
+    await expectHeading(page, 'Not allowed for your role');
     expect(await page.locator('main').textContent()).toContain('signed in as Member');
     await shoot('auth-not-allowed');
 
     await page.goto(`${base}/account`, { waitUntil: 'networkidle' });
-    expect(await heading()).toBe('Your account');
+    await expectHeading(page, 'Your account');
     await page.locator('[data-session-current]').waitFor();
     expect(await page.locator('[data-session-current]').textContent()).toContain('This device');
     expect(await seriousAxeViolations()).toEqual([]);
@@ -254,7 +252,7 @@ describe('accounts in the browser', () => {
     await signOut();
     await signIn(person.email, person.password);
     await page.waitForURL(`${base}/workbench`);
-    expect(await heading()).toBe('Your workbench');
+    await expectHeading(page, 'Your workbench');
     await page.getByRole('banner').getByRole('link', { name: accountLink(person.name, 'Engineer') }).waitFor();
     expect(problems.all()).toEqual([]);
     await signOut();

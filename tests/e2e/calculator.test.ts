@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { launchBrowser, type TestBrowser } from './support/browser';
+import { expectHeading } from './support/heading';
 import { watchContext, type PageProblems } from './support/page-watch';
 import { artifactsDir } from './support/paths';
 import { startBuiltServer, type RunningServer } from './support/server';
@@ -180,7 +181,7 @@ describe.each(templates)('the calculator for %s', (slug) => {
     await page.getByRole('link', { name: detail.title, exact: true }).click();
     await page.waitForURL(`**/templates/${slug}`);
     await waitForCurrentResults();
-    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe(detail.title);
+    await expectHeading(page, detail.title);
     expect(await page.getByRole('complementary', { name: 'Cautions' }).isVisible()).toBe(true);
     expect(await page.getByText(/Every part balances to/).isVisible()).toBe(true);
 

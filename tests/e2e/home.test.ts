@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { launchBrowser, type TestBrowser } from './support/browser';
+import { expectHeading } from './support/heading';
 import { watchContext, type PageProblems } from './support/page-watch';
 import { artifactsDir, repoRoot } from './support/paths';
 import { startBuiltServer, type RunningServer } from './support/server';
@@ -104,7 +105,7 @@ describe('the built app served by the Pinwork server', () => {
     const nav = page.getByRole('navigation', { name: 'Main' });
     await nav.getByRole('link', { name: 'How it works' }).click();
     await page.waitForURL(`${server.url}/how-it-works`);
-    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('How it works');
+    await expectHeading(page, 'How it works');
     expect(await nav.getByRole('link', { name: 'How it works' }).getAttribute('aria-current')).toBe('page');
     expect(await page.title()).toBe('How it works · Pinwork');
     await shoot('how-it-works');
@@ -114,7 +115,7 @@ describe('the built app served by the Pinwork server', () => {
   it('sends the library’s first address on to /templates, and the main navigation links there', async () => {
     await page.goto(`${server.url}/library`, { waitUntil: 'networkidle' });
     await page.waitForURL('**/templates');
-    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Template library');
+    await expectHeading(page, 'Template library');
     const nav = page.getByRole('navigation', { name: 'Main' });
     expect(await nav.getByRole('link', { name: 'Library' }).getAttribute('href')).toBe('/templates');
     expect(await nav.textContent()).not.toMatch(/coming soon/i);
@@ -124,7 +125,7 @@ describe('the built app served by the Pinwork server', () => {
   it('answers an unknown address with the app’s not-found page', async () => {
     const response = await page.goto(`${server.url}/no/such/page`, { waitUntil: 'networkidle' });
     expect(response?.headers()['content-type']).toMatch(/text\/html/);
-    expect(await page.getByRole('heading', { level: 1 }).textContent()).toBe('Page not found');
+    await expectHeading(page, 'Page not found');
     expect(await page.locator('main').textContent()).toContain('/no/such/page');
     await shoot('not-found');
     expect(problems.all()).toEqual([]);
