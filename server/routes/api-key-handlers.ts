@@ -43,7 +43,12 @@ export function apiKeyHandlers(s: ApiKeyRouteServices): Record<ApiKeyRouteId, Re
     'apiKeys.rotate': rotate(orgScope),
     'apiKeys.revoke': revoke(orgScope),
     'apiKeys.usage': usage(orgScope),
-    'apiKeys.admin.list': list(() => everyKey),
+    'apiKeys.admin.list': async (_req, res) => {
+      res.setHeader('Cache-Control', 'no-store');
+      const items = await s.apiKeys.list(everyKey);
+      const owners = [...new Set(items.map((k) => k.organisationId).filter((id): id is string => id !== null))];
+      res.json({ items, organisationNames: await s.usageReports.organisationNames(owners) });
+    },
     'apiKeys.admin.create': async (req, res) => {
       res.setHeader('Cache-Control', 'no-store');
       res.status(201).json(await s.apiKeys.create({ organisationId: null, userId: signedIn(req).user.id }, body(req)));

@@ -193,7 +193,11 @@ export const apiKeyInfoSchema = z.object({
   rotatedFromId: z.string().nullable(),
 });
 export type ApiKeyInfo = z.infer<typeof apiKeyInfoSchema>;
-export const apiKeyListSchema = z.object({ items: z.array(apiKeyInfoSchema) });
+export const apiKeyListSchema = z.object({
+  items: z.array(apiKeyInfoSchema),
+  /** Admin list only: the name of each organisation that owns a listed key, by its id. */
+  organisationNames: z.record(z.string(), z.string()).optional(),
+});
 /** Creation and rotation: the only time the whole key is ever shown. */
 export const createdApiKeySchema = z.object({ key: z.string(), info: apiKeyInfoSchema });
 export type CreatedApiKey = z.infer<typeof createdApiKeySchema>;

@@ -1,7 +1,8 @@
-import { and, asc, eq, gte, lte, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, inArray, lte, sql } from 'drizzle-orm';
 import type { UsageReport } from '../../../shared/api/v1';
 import type { Database } from '../../db/database';
 import { apiKeys, apiQuotas, usageCounters } from '../../db/schema/api-access';
+import { organisations } from '../../db/schema/organisations';
 
 const day = (d: Date) => d.toISOString().slice(0, 10);
 
@@ -47,5 +48,12 @@ export class UsageReportService {
       monthly = { used: Number(sum?.used ?? 0), quota: quota ? quota.monthlyRequests : this.defaultMonthlyQuota };
     }
     return { from, to, rows: rows.map((r) => ({ ...r, day: String(r.day) })), monthly };
+  }
+
+  /** Names of the organisations that own keys, by id (the admin key list and usage name their owners). */
+  async organisationNames(ids: readonly string[]): Promise<Record<string, string>> {
+    if (ids.length === 0) return {};
+    const rows = await this.db.select({ id: organisations.id, name: organisations.name }).from(organisations).where(inArray(organisations.id, [...ids]));
+    return Object.fromEntries(rows.map((r) => [r.id, r.name]));
   }
 }
