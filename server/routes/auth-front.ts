@@ -3,6 +3,7 @@ import express, { type Request, type RequestHandler, type Response } from 'expre
 import { z } from 'zod';
 import {
   authProblemTypes,
+  changePasswordRequestSchema,
   requestPasswordResetSchema,
   resendVerificationRequestSchema,
   resetPasswordRequestSchema,
@@ -223,7 +224,37 @@ export function authFrontRouter(options: AuthFrontOptions) {
     res.setHeader('Cache-Control', 'no-store');
     res.status(answer.status).json(withoutSessionToken(answer.body));
   });
-  router.post('/change-password', passThrough);
+  // Signed in: the session is found first so the per-account limiter counts the person, not
+  // an address in the body. A wrong current password is a field error, not a sign-in failure.
+  const signedInFirst: RequestHandler = async (req, res, next) => {
+    const me = await sessionOf(auth, req);
+    if (!me) return next(new HttpProblem({ type: authProblemTypes.unauthorized, title: 'Sign-in required', status: 401, detail: 'Sign in to change your password.' }));
+    res.locals.accountId = me.user.id;
+    next();
+  };
+  router.post('/change-password', signedInFirst, ...limit.changePassword, async (req, res) => {
+    const me = (await sessionOf(auth, req))!;
+    const body = parseOrThrow(
+      changePasswordRequestSchema.superRefine((b, ctx) => checkPasswordStrength(ctx, b.newPassword, me.user.email, 'newPassword')),
+      req.body ?? {},
+    );
+    if (body.newPassword === body.currentPassword) {
+      throw new HttpProblem({ type: problemTypes.validation, title: 'Validation failed', status: 422, detail: 'The new password must differ from the current one.', errors: [{ path: '/newPassword', message: 'must differ from the current password' }] });
+    }
+    const answer = await callAuth(req, { currentPassword: body.currentPassword, newPassword: body.newPassword, revokeOtherSessions: body.signOutOtherSessions });
+    if (answer.status >= 400) {
+      if (codeOf(answer) === 'INVALID_PASSWORD') {
+        await recordAudit(db, { actorKind: 'user', actorId: me.user.id, action: 'auth.password-change-failed', target: `user:${me.user.id}`, ip: ipOf(req) });
+        throw new HttpProblem({ type: problemTypes.validation, title: 'Validation failed', status: 422, detail: 'The current password is not right.', errors: [{ path: '/currentPassword', message: 'is not right' }] });
+      }
+      throw libraryProblem(answer);
+    }
+    await recordAudit(db, { actorKind: 'user', actorId: me.user.id, action: 'auth.password-changed', target: `user:${me.user.id}`, ip: ipOf(req), details: { otherSessionsSignedOut: body.signOutOtherSessions } });
+    // With other sessions ended the library starts a new one for this browser: pass its cookie on.
+    forwardCookies(answer, res);
+    res.setHeader('Cache-Control', 'no-store');
+    res.json({ status: 'password-changed', otherSessionsSignedOut: body.signOutOtherSessions });
+  });
   router.post('/update-user', passThrough);
 
   router.use((req, res, next) => {

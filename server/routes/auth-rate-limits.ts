@@ -17,6 +17,8 @@ export interface AuthRateLimits {
   signUp: { perIp: LimitRule; perAccount: LimitRule };
   passwordReset: { perIp: LimitRule; perAccount: LimitRule };
   verification: { perIp: LimitRule; perAccount: LimitRule };
+  /** Per account here means the signed-in person (a stolen session guessing the current password). */
+  changePassword: { perIp: LimitRule; perAccount: LimitRule };
 }
 
 const MINUTE = 60_000;
@@ -26,6 +28,7 @@ export const defaultAuthRateLimits: AuthRateLimits = {
   signUp: { perIp: { limit: 10, windowMs: 60 * MINUTE }, perAccount: { limit: 3, windowMs: 60 * MINUTE } },
   passwordReset: { perIp: { limit: 10, windowMs: 60 * MINUTE }, perAccount: { limit: 3, windowMs: 60 * MINUTE } },
   verification: { perIp: { limit: 10, windowMs: 60 * MINUTE }, perAccount: { limit: 3, windowMs: 60 * MINUTE } },
+  changePassword: { perIp: { limit: 20, windowMs: 60 * MINUTE }, perAccount: { limit: 5, windowMs: 15 * MINUTE } },
 };
 
 function emailOf(req: Request): string | null {
@@ -33,7 +36,13 @@ function emailOf(req: Request): string | null {
   return typeof email === 'string' && email.trim() ? email.trim().toLowerCase() : null;
 }
 
-function limiter(db: Database, name: string, rule: LimitRule, scope: 'ip' | 'account', onlyFailures: boolean): RequestHandler {
+/** The signed-in person's id, set by the route before its limiters run (see change-password). */
+export function signedInAccountOf(req: Request): string | null {
+  const id = (req.res?.locals as { accountId?: unknown } | undefined)?.accountId;
+  return typeof id === 'string' ? `user:${id}` : null;
+}
+
+function limiter(db: Database, name: string, rule: LimitRule, scope: 'ip' | 'account', onlyFailures: boolean, accountOf: (req: Request) => string | null = emailOf): RequestHandler {
   return rateLimit({
     windowMs: rule.windowMs,
     limit: rule.limit,
@@ -42,8 +51,8 @@ function limiter(db: Database, name: string, rule: LimitRule, scope: 'ip' | 'acc
     identifier: `${name}-${scope}`,
     store: new DatabaseRateLimitStore(db, `auth:${name}:${scope}:`),
     skipSuccessfulRequests: onlyFailures,
-    skip: scope === 'account' ? (req) => emailOf(req) === null : undefined,
-    keyGenerator: scope === 'account' ? (req) => emailOf(req)! : (req) => ipKeyGenerator(req.ip ?? 'unknown'),
+    skip: scope === 'account' ? (req) => accountOf(req) === null : undefined,
+    keyGenerator: scope === 'account' ? (req) => accountOf(req)! : (req) => ipKeyGenerator(req.ip ?? 'unknown'),
     handler: (_req, res, next) => {
       const wait = res.getHeader('Retry-After');
       next(
@@ -59,14 +68,15 @@ function limiter(db: Database, name: string, rule: LimitRule, scope: 'ip' | 'acc
 }
 
 export function authLimiters(db: Database, limits: AuthRateLimits) {
-  const pair = (name: keyof AuthRateLimits, onlyFailures = false): RequestHandler[] => [
+  const pair = (name: keyof AuthRateLimits, onlyFailures = false, accountOf = emailOf): RequestHandler[] => [
     limiter(db, name, limits[name].perIp, 'ip', false),
-    limiter(db, name, limits[name].perAccount, 'account', onlyFailures),
+    limiter(db, name, limits[name].perAccount, 'account', onlyFailures, accountOf),
   ];
   return {
     signIn: pair('signIn', true),
     signUp: pair('signUp'),
     passwordReset: pair('passwordReset'),
     verification: pair('verification'),
+    changePassword: pair('changePassword', false, signedInAccountOf),
   };
 }

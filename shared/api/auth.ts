@@ -133,6 +133,18 @@ export const resetPasswordRequestSchema = z.object({
 export type ResetPasswordRequest = z.infer<typeof resetPasswordRequestSchema>;
 export const resetPasswordResponseSchema = z.object({ status: z.literal('password-changed') });
 
+/** POST /api/auth/change-password — signed in. 200 `changePasswordResponse`; 401 without a
+ *  session; 422 when the current password is not right (/currentPassword) or the new one is weak
+ *  (/newPassword); 429. Other sessions are signed out unless `signOutOtherSessions` is false. */
+export const changePasswordRequestSchema = z.object({
+  currentPassword: z.string({ error: 'is required' }).min(1, 'must not be empty').max(PASSWORD_MAX_LENGTH, `must be at most ${PASSWORD_MAX_LENGTH} characters`),
+  newPassword: newPasswordSchema,
+  signOutOtherSessions: z.boolean({ error: 'must be true or false' }).default(true),
+});
+export type ChangePasswordRequest = z.input<typeof changePasswordRequestSchema>;
+export const changePasswordResponseSchema = z.object({ status: z.literal('password-changed'), otherSessionsSignedOut: z.boolean() });
+export type ChangePasswordResponse = z.infer<typeof changePasswordResponseSchema>;
+
 // ---------------------------------------------------------------- the signed-in user
 
 export const myOrganisationSchema = z.object({

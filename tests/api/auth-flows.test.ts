@@ -262,6 +262,80 @@ describe('password reset', () => {
   });
 });
 
+describe('changing the password while signed in', () => {
+  const change = (agent: ReturnType<typeof request.agent>, body: object) => agent.post('/api/auth/change-password').set('Origin', ORIGIN).send(body);
+
+  it('refuses a wrong current password and a weak new one beside their fields, and records the failure', async () => {
+    const email = uniqueEmail('change-refused');
+    const userId = await signUpVerified(t, database, email);
+    const agent = await signedInAgent(t, email);
+
+    const wrong = await change(agent, { currentPassword: 'not-the-password-1', newPassword: 'lifting-beam-5523' });
+    expect(wrong.status).toBe(422);
+    expect(problem(wrong.body).errors).toEqual([{ path: '/currentPassword', message: 'is not right' }]);
+
+    const weak = await change(agent, { currentPassword: GOOD_PASSWORD, newPassword: 'short' });
+    expect(weak.status).toBe(422);
+    expect(problem(weak.body).errors?.map((e) => e.path)).toContain('/newPassword');
+
+    // The e-mail's local part inside the new password is refused as at sign-up.
+    const local = email.split('@')[0]!;
+    const withAddress = await change(agent, { currentPassword: GOOD_PASSWORD, newPassword: `${local}-xyz` });
+    expect(withAddress.status).toBe(422);
+    expect(problem(withAddress.body).errors).toEqual([{ path: '/newPassword', message: 'must not contain your e-mail address' }]);
+
+    const same = await change(agent, { currentPassword: GOOD_PASSWORD, newPassword: GOOD_PASSWORD });
+    expect(same.status).toBe(422);
+    expect(problem(same.body).errors?.[0]?.path).toBe('/newPassword');
+
+    const failures = await database.db.select().from(auditLog).where(eq(auditLog.actorId, userId));
+    expect(failures.map((row) => row.action)).toContain('auth.password-change-failed');
+    expect((await request(t.app).post('/api/auth/sign-in/email').send({ email, password: GOOD_PASSWORD })).status).toBe(200);
+  });
+
+  it('changes the password, signs out the other sessions but keeps this browser signed in, and records it', async () => {
+    const email = uniqueEmail('change');
+    const userId = await signUpVerified(t, database, email);
+    const laptop = await signedInAgent(t, email);
+    const phone = await signedInAgent(t, email);
+
+    const done = await change(laptop, { currentPassword: GOOD_PASSWORD, newPassword: 'fresh-boom-pin-4410' });
+    expect(done.status, JSON.stringify(done.body)).toBe(200);
+    expect(done.body).toEqual({ status: 'password-changed', otherSessionsSignedOut: true });
+    expect((await laptop.get('/api/me')).status).toBe(200);
+    expect((await phone.get('/api/me')).status).toBe(401);
+    expect(await database.db.select().from(sessions).where(eq(sessions.userId, userId))).toHaveLength(1);
+
+    expect((await request(t.app).post('/api/auth/sign-in/email').send({ email, password: GOOD_PASSWORD })).status).toBe(401);
+    expect((await request(t.app).post('/api/auth/sign-in/email').send({ email, password: 'fresh-boom-pin-4410' })).status).toBe(200);
+    const audit = await database.db.select().from(auditLog).where(eq(auditLog.actorId, userId));
+    expect(audit.map((row) => row.action)).toContain('auth.password-changed');
+  });
+
+  it('keeps the other sessions when asked to', async () => {
+    const email = uniqueEmail('change-keep');
+    await signUpVerified(t, database, email);
+    const laptop = await signedInAgent(t, email);
+    const phone = await signedInAgent(t, email);
+    const done = await change(laptop, { currentPassword: GOOD_PASSWORD, newPassword: 'fresh-boom-pin-4411', signOutOtherSessions: false });
+    expect(done.body).toEqual({ status: 'password-changed', otherSessionsSignedOut: false });
+    expect((await phone.get('/api/me')).status).toBe(200);
+    expect((await laptop.get('/api/me')).status).toBe(200);
+  });
+
+  it('asks a visitor without a session to sign in, and refuses a foreign origin', async () => {
+    const anonymous = await request(t.app).post('/api/auth/change-password').set('Origin', ORIGIN).send({ currentPassword: 'x', newPassword: 'fresh-boom-pin-4412' });
+    expect(anonymous.status).toBe(401);
+    expect(problem(anonymous.body).type).toBe('/problems/unauthorized');
+    const email = uniqueEmail('change-foreign');
+    await signUpVerified(t, database, email);
+    const agent = await signedInAgent(t, email);
+    const foreign = await agent.post('/api/auth/change-password').set('Origin', 'https://elsewhere.example').send({ currentPassword: GOOD_PASSWORD, newPassword: 'fresh-boom-pin-4413' });
+    expect(foreign.status).toBe(403);
+    expect((await request(t.app).post('/api/auth/sign-in/email').send({ email, password: GOOD_PASSWORD })).status).toBe(200);
+  });
+});
+
 describe('sessions', () => {
   it('lists one\'s sessions and signs out the others, keeping this one', async () => {
     const email = uniqueEmail('sessions');

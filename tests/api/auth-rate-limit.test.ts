@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DatabaseHandle } from '../../server/db/database';
-import { GOOD_PASSWORD, authApp, roomyRateLimits, signUpVerified, uniqueEmail } from '../helpers/auth-fixture';
+import { GOOD_PASSWORD, ORIGIN, authApp, roomyRateLimits, signUpVerified, signedInAgent, uniqueEmail } from '../helpers/auth-fixture';
 import { openTestDatabase } from '../helpers/test-database';
 
 let database: DatabaseHandle;
@@ -70,5 +70,26 @@ describe('rate limits', () => {
     expect((await request(t.app).post('/api/auth/request-password-reset').send({ email })).status).toBe(200);
     expect((await request(t.app).post('/api/auth/request-password-reset').send({ email: email.toUpperCase() })).status).toBe(200);
     expect((await request(t.app).post('/api/auth/request-password-reset').send({ email })).status).toBe(429);
+  });
+
+  it('limits password changes per signed-in person, whichever session they come from', async () => {
+    const t = authApp(database, { rateLimits: { ...roomyRateLimits, changePassword: { perIp: { limit: 100, windowMs: hour }, perAccount: { limit: 2, windowMs: hour } } } });
+    const email = uniqueEmail('change-limit');
+    await signUpVerified(t, database, email);
+    const first = await signedInAgent(t, email);
+    const second = await signedInAgent(t, email);
+    const guess = (agent: typeof first, n: number) =>
+      agent.post('/api/auth/change-password').set('Origin', ORIGIN).send({ currentPassword: `guess-number-${n}`, newPassword: 'fresh-boom-pin-7001' });
+    expect((await guess(first, 1)).status).toBe(422);
+    expect((await guess(second, 2)).status).toBe(422);
+    const limited = await guess(first, 3);
+    expect(limited.status).toBe(429);
+    expect(limited.headers['retry-after']).toMatch(/^\d+$/);
+    expect(limited.body.type).toBe('/problems/rate-limited');
+    // Another person is not held back by this one's attempts.
+    const other = uniqueEmail('change-limit-other');
+    await signUpVerified(t, database, other);
+    const otherAgent = await signedInAgent(t, other);
+    expect((await otherAgent.post('/api/auth/change-password').set('Origin', ORIGIN).send({ currentPassword: GOOD_PASSWORD, newPassword: 'fresh-boom-pin-7002' })).status).toBe(200);
   });
 });

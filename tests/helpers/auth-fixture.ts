@@ -25,6 +25,7 @@ export const roomyRateLimits: AuthRateLimits = {
   signUp: { perIp: roomy, perAccount: roomy },
   passwordReset: { perIp: roomy, perAccount: roomy },
   verification: { perIp: roomy, perAccount: roomy },
+  changePassword: { perIp: roomy, perAccount: roomy },
 };
 
 export function authApp(database: DatabaseHandle, accounts: AppOptions['accounts'] = {}, options: Partial<AppOptions> = {}): AuthTestApp {
