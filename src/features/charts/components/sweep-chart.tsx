@@ -1,12 +1,12 @@
 import { useId, useMemo, useState } from 'react';
-import { CartesianGrid, Legend, Line, LineChart, ReferenceArea, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { formatNumber } from '../../../../shared/units/format';
 import type { Quantity } from '../../../../shared/units/quantities';
-import { toDisplay, unitOf, type UnitSystem } from '../../../../shared/units/unit-systems';
+import { prepareSweep } from '../../../../shared/charts/sweep-rows';
+import { SweepPlot } from '../../../../shared/charts/sweep-plot';
+import { unitOf, type UnitSystem } from '../../../../shared/units/unit-systems';
 import { ApiError } from '../../../lib/api-client';
 import { downloadCsv, toCsv } from '../../../lib/csv';
 import { useSweep, type SweepResponse } from '../api/sweep-template';
-import { SERIES } from './chart-colours';
 
 export interface ChartInput {
   key: string;
@@ -33,50 +33,15 @@ const STEPS = 41;
 
 type Sweep = SweepResponse['sweep'];
 
-/** Rows of the sweep in display units: the varied input, then each series; a failed step is all gap. */
-export function sweepRows(sweep: Sweep, system: UnitSystem) {
-  return sweep.steps.map((s) => {
-    const row: Record<string, number | null | string> = { x: toDisplay(s.value, sweep.input.quantity, system) };
-    for (const series of sweep.series) {
-      const v = s.ok ? s.values[series.key] : null;
-      row[series.key] = v === null || v === undefined ? null : toDisplay(v, series.quantity, system);
-    }
-    if (!s.ok) row.error = s.error.message;
-    return row;
-  });
-}
-
 export function sweepCsv(sweep: Sweep, system: UnitSystem): string {
-  const inputUnit = unitOf(sweep.input.quantity, system);
-  const header = [
-    `${sweep.input.label}${inputUnit ? ` (${inputUnit})` : ''}`,
-    ...sweep.series.map((s) => `${s.label}${unitOf(s.quantity, system) ? ` (${unitOf(s.quantity, system)})` : ''}`),
-    'Note',
-  ];
-  const rows = sweepRows(sweep, system).map((r) => [
-    r.x as number,
-    ...sweep.series.map((s) => (r[s.key] === null ? null : Number((r[s.key] as number).toPrecision(10)))),
+  const chart = prepareSweep(sweep, system);
+  const header = [chart.xLabel, ...chart.series.map((s) => s.name), 'Note'];
+  const rows = chart.rows.map((r) => [
+    r.x,
+    ...chart.series.map((s) => (r[s.key] === null ? null : Number((r[s.key] as number).toPrecision(10)))),
     (r.error as string | undefined) ?? '',
   ]);
   return toCsv([header, ...rows]);
-}
-
-/** Runs of consecutive failed steps, for shading and for the note under the chart. */
-function gaps(sweep: Sweep, system: UnitSystem) {
-  const out: { from: number; to: number; message: string }[] = [];
-  let open: { from: number; to: number; message: string } | null = null;
-  for (const s of sweep.steps) {
-    const x = toDisplay(s.value, sweep.input.quantity, system);
-    if (!s.ok) {
-      if (open) open.to = x;
-      else open = { from: x, to: x, message: s.error.message };
-    } else if (open) {
-      out.push(open);
-      open = null;
-    }
-  }
-  if (open) out.push(open);
-  return out;
 }
 
 export function SweepChart({ slug, version, inputs, system, specInputs, results }: SweepChartProps) {
@@ -87,12 +52,12 @@ export function SweepChart({ slug, version, inputs, system, specInputs, results 
   const chosen = picked.filter((k) => results.some((r) => r.key === k));
   const sweep = useSweep({ slug, version, inputs, input: inputKey, steps: STEPS, results: chosen }, chosen.length > 0 && inputKey !== '');
   const data = sweep.data?.sweep;
-  const rows = useMemo(() => (data ? sweepRows(data, system) : []), [data, system]);
-  const holes = useMemo(() => (data ? gaps(data, system) : []), [data, system]);
+  const chart = useMemo(() => (data ? prepareSweep(data, system) : null), [data, system]);
+  const rows = chart?.rows ?? [];
+  const holes = chart?.gaps ?? [];
 
   const toggle = (key: string) => setPicked((p) => (p.includes(key) ? p.filter((k) => k !== key) : [...p, key].slice(-4)));
-  const xUnit = data ? unitOf(data.input.quantity, system) : '';
-  const yUnits = data ? [...new Set(data.series.map((s) => unitOf(s.quantity, system)))].filter(Boolean).join(', ') : '';
+  const xUnit = chart?.input.unit ?? '';
 
   return (
     <section aria-labelledby="sweep-heading" className="grid gap-4">
@@ -141,38 +106,10 @@ export function SweepChart({ slug, version, inputs, system, specInputs, results 
           The sweep could not be drawn: {sweep.error instanceof ApiError ? sweep.error.problem.detail ?? sweep.error.message : 'the request failed.'}
         </p>
       )}
-      {data && chosen.length > 0 && (
+      {data && chart && chosen.length > 0 && (
         <figure className={`grid gap-2 transition-opacity ${sweep.isPlaceholderData ? 'opacity-60' : ''}`} data-chart="sweep" aria-busy={sweep.isFetching}>
           <div className="h-72 w-full rounded-xl border border-ink-100 bg-paper-50 p-2" aria-hidden="true">
-            <ResponsiveContainer width="100%" height="100%">
-              <LineChart accessibilityLayer={false} data={rows} margin={{ top: 10, right: 16, bottom: 24, left: 12 }}>
-                <CartesianGrid stroke="#d5e6e6" />
-                <XAxis
-                  dataKey="x"
-                  type="number"
-                  domain={['dataMin', 'dataMax']}
-                  tickFormatter={(v: number) => formatNumber(v, { significant: 3 })}
-                  label={{ value: `${data.input.label}${xUnit ? ` (${xUnit})` : ''}`, position: 'insideBottom', offset: -14, fill: '#20494d', fontSize: 12 }}
-                  stroke="#357174"
-                  fontSize={12}
-                />
-                <YAxis tickFormatter={(v: number) => formatNumber(v, { significant: 3 })} stroke="#357174" fontSize={12} width={64}
-                  label={{ value: yUnits, angle: -90, position: 'insideLeft', fill: '#20494d', fontSize: 12 }} />
-                {holes.map((h) => (
-                  <ReferenceArea key={h.from} x1={h.from} x2={h.to === h.from ? h.from + 1e-9 : h.to} fill="#ffe6cf" fillOpacity={0.8} stroke="#dd6a1f" strokeDasharray="3 3" />
-                ))}
-                <Tooltip formatter={(v) => (typeof v === 'number' ? formatNumber(v) : String(v))} labelFormatter={(v) => `${data.input.label}: ${formatNumber(Number(v))} ${xUnit}`} />
-                <Legend verticalAlign="top" height={28} />
-                {data.series.map((s, i) => {
-                  const look = SERIES[i % SERIES.length]!;
-                  const unit = unitOf(s.quantity, system);
-                  return (
-                    <Line key={s.key} dataKey={s.key} name={`${s.label}${unit ? ` (${unit})` : ''}`} stroke={look.stroke} strokeDasharray={look.dash}
-                      strokeWidth={2.25} dot={false} connectNulls={false} isAnimationActive={false} />
-                  );
-                })}
-              </LineChart>
-            </ResponsiveContainer>
+            <SweepPlot chart={chart} interactive />
           </div>
           <figcaption className="text-sm text-ink-800">
             {data.series.map((s) => s.label).join(', ')} as {data.input.label.toLowerCase()} runs from {formatNumber(rows[0]?.x as number)} to{' '}

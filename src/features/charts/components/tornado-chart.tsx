@@ -1,7 +1,8 @@
 import { useId, useMemo, useState } from 'react';
-import { Bar, BarChart, CartesianGrid, LabelList, ReferenceLine, ResponsiveContainer, XAxis, YAxis } from 'recharts';
 import { formatNumber } from '../../../../shared/units/format';
-import { toDisplay, unitOf, type UnitSystem } from '../../../../shared/units/unit-systems';
+import { TornadoPlot, tornadoHeight } from '../../../../shared/charts/tornado-plot';
+import { prepareTornado } from '../../../../shared/charts/tornado-rows';
+import type { UnitSystem } from '../../../../shared/units/unit-systems';
 import { ApiError } from '../../../lib/api-client';
 import { useSensitivity } from '../api/get-sensitivity';
 import type { ChartResult } from './sweep-chart';
@@ -25,18 +26,10 @@ export function TornadoChart({ slug, version, inputs, system, results }: Tornado
   const query = useSensitivity({ slug, version, inputs, result: resultKey, percent }, resultKey !== '');
   const tornado = query.data?.tornado;
 
-  const unit = tornado ? unitOf(tornado.result.quantity, system) : '';
-  const rows = useMemo(() => {
-    if (!tornado) return [];
-    const q = tornado.result.quantity;
-    const base = toDisplay(tornado.base, q, system);
-    return tornado.bars.map((b) => {
-      const low = b.low.value === null ? base : toDisplay(b.low.value, q, system);
-      const high = b.high.value === null ? base : toDisplay(b.high.value, q, system);
-      return { label: b.label, range: [Math.min(low, high), Math.max(low, high)] as [number, number], low, high, bar: b };
-    });
-  }, [tornado, system]);
-  const base = tornado ? toDisplay(tornado.base, tornado.result.quantity, system) : 0;
+  const chart = useMemo(() => (tornado ? prepareTornado(tornado, system) : null), [tornado, system]);
+  const rows = chart?.rows ?? [];
+  const unit = chart?.result.unit ?? '';
+  const base = chart?.base ?? 0;
 
   return (
     <section aria-labelledby="tornado-heading" className="grid gap-4">
@@ -66,21 +59,10 @@ export function TornadoChart({ slug, version, inputs, system, results }: Tornado
           The ranking could not be made: {query.error instanceof ApiError ? query.error.problem.detail ?? query.error.message : 'the request failed.'}
         </p>
       )}
-      {tornado && (
+      {tornado && chart && (
         <figure className={`grid gap-2 transition-opacity ${query.isPlaceholderData ? 'opacity-60' : ''}`} data-chart="tornado" aria-busy={query.isFetching}>
-          <div className="w-full rounded-xl border border-ink-100 bg-paper-50 p-2" style={{ height: `${Math.max(160, rows.length * 44 + 60)}px` }} aria-hidden="true">
-            <ResponsiveContainer width="100%" height="100%">
-              <BarChart accessibilityLayer={false} data={rows} layout="vertical" margin={{ top: 8, right: 56, bottom: 8, left: 8 }} barCategoryGap="22%">
-                <CartesianGrid stroke="#d5e6e6" horizontal={false} />
-                <XAxis type="number" domain={['auto', 'auto']} tickFormatter={(v: number) => formatNumber(v, { significant: 3 })} stroke="#357174" fontSize={12} />
-                <YAxis type="category" dataKey="label" width={150} stroke="#357174" fontSize={12} tick={{ fill: '#142e32' }} />
-                <ReferenceLine x={base} stroke="#dd6a1f" strokeWidth={2} strokeDasharray="4 3" label={{ value: 'as set', position: 'top', fill: '#933f14', fontSize: 11 }} />
-                <Bar dataKey="range" fill="#357174" isAnimationActive={false} radius={3}>
-                  <LabelList dataKey="bar.swing" position="right" fontSize={11} fill="#142e32"
-                    formatter={(v) => (typeof v === 'number' ? `±${formatNumber(toDisplay(v, tornado.result.quantity, system) / 2, { significant: 2 })}` : '')} />
-                </Bar>
-              </BarChart>
-            </ResponsiveContainer>
+          <div className="w-full rounded-xl border border-ink-100 bg-paper-50 p-2" style={{ height: `${tornadoHeight(rows.length)}px` }} aria-hidden="true">
+            <TornadoPlot chart={chart} />
           </div>
           <figcaption className="text-sm text-ink-800">
             {tornado.result.label} is {formatNumber(base)} {unit} as set. Each bar spans the result with one input moved {tornado.percent} % down and up, the others held; the longest bar moves it most.
