@@ -15,7 +15,7 @@ import { VerifyEmailRoute } from './routes/verify-email';
 import { WorkbenchRoute } from './routes/workbench';
 
 const cap = capabilitySchema.enum;
-const admin = (name: 'AdminLayoutRoute' | 'AdminUsersRoute' | 'AdminOrganisationsRoute' | 'AdminAuditRoute' | 'AdminMailRoute') => () =>
+const admin = (name: 'AdminLayoutRoute' | 'AdminUsersRoute' | 'AdminOrganisationsRoute' | 'AdminApiKeysRoute' | 'AdminAuditRoute' | 'AdminMailRoute') => () =>
   import('./routes/admin').then((m) => ({ Component: m[name] }));
 
 /** Sign-in, accounts, organisations and administration; the guards only hide, the server decides. */
@@ -52,6 +52,7 @@ export const accountRoutes: RouteObject[] = [
         children: [
           { index: true, lazy: admin('AdminUsersRoute') },
           { path: 'organisations', lazy: admin('AdminOrganisationsRoute') },
+          { path: 'api-keys', lazy: admin('AdminApiKeysRoute') },
           { path: 'audit', lazy: admin('AdminAuditRoute') },
           { path: 'mail', lazy: admin('AdminMailRoute') },
         ],

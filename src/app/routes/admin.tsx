@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { Outlet } from 'react-router-dom';
 import { Page } from '../../components/page';
 import { AdminTabs } from '../../features/admin/components/admin-tabs';
+import { AdminApiKeys } from '../../features/api-keys/components/admin-api-keys';
 import { AuditTable } from '../../features/admin/components/audit-table';
 import { MailOutbox } from '../../features/admin/components/mail-outbox';
 import { OrganisationsTable } from '../../features/admin/components/organisations-table';
@@ -45,6 +46,14 @@ export function AdminOrganisationsRoute() {
   return (
     <Section title="Organisations">
       <OrganisationsTable />
+    </Section>
+  );
+}
+
+export function AdminApiKeysRoute() {
+  return (
+    <Section title="API keys">
+      <AdminApiKeys />
     </Section>
   );
 }

@@ -5,6 +5,7 @@ import { useMail } from '../api/get-mail';
 const tabs = [
   { to: '/admin', label: 'Users', end: true },
   { to: '/admin/organisations', label: 'Organisations' },
+  { to: '/admin/api-keys', label: 'API keys' },
   { to: '/admin/audit', label: 'Audit log' },
   { to: '/admin/mail', label: 'Mail outbox' },
 ];

@@ -1,15 +1,15 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { inputClass, linkClass } from '../../../components/form-styles';
 import { Notice } from '../../../components/notice';
 import { formErrorsFrom } from '../../../lib/form-errors';
-import { useMyOrganisations } from '../api/get-my-organisations';
+import { useMyOrganisations, type MyOrganisation as Membership } from '../api/get-my-organisations';
 import { OrganisationMembers } from './organisation-members';
 
 const kindLabel = { supplier: 'Supplier organisation', engineering: 'Engineering organisation' } as const;
 
 /** The organisations the signed-in person belongs to; most people have one. */
-export function MyOrganisation({ currentUserId, isAdmin }: { currentUserId: string; isAdmin: boolean }) {
+export function MyOrganisation({ currentUserId, isAdmin, more }: { currentUserId: string; isAdmin: boolean; /** Sections other features add for the organisation shown (composed in src/app). */ more?: (organisation: Membership) => ReactNode }) {
   const mine = useMyOrganisations();
   const [chosen, setChosen] = useState<string>('');
 
@@ -55,6 +55,7 @@ export function MyOrganisation({ currentUserId, isAdmin }: { currentUserId: stri
         )}
       </div>
       <OrganisationMembers key={current.id} organisationId={current.id} currentUserId={currentUserId} canManage={current.role === 'owner' || isAdmin} />
+      {more?.(current)}
     </div>
   );
 }
