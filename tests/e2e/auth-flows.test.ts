@@ -1,10 +1,10 @@
-import { readFileSync } from 'node:fs';
-import { createRequire } from 'node:module';
 import { join } from 'node:path';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { launchBrowser, type TestBrowser } from './support/browser';
 import { expectHeading } from './support/heading';
+import { pageOverflow as overflowOf, seriousAxeViolations as seriousAxe } from './support/page-checks';
+import { demoAccountsFrom, signInWithForm, signOutWithMenu } from './support/session';
 import { watchContext, type PageProblems } from './support/page-watch';
 import { artifactsDir } from './support/paths';
 import { startBuiltServer, type RunningServer } from './support/server';
@@ -20,13 +20,7 @@ let problems: PageProblems;
 let page: Page;
 let base: string;
 
-interface Demo {
-  email: string;
-  password: string;
-  name: string;
-}
-const demo: Record<'admin' | 'engineer' | 'supplier', Demo> = {} as never;
-const axeSource = readFileSync(createRequire(import.meta.url).resolve('axe-core/axe.min.js'), 'utf8');
+let demo: ReturnType<typeof demoAccountsFrom>;
 
 const person = { name: 'Dara Quill', email: `dara.quill.${Date.now()}@example.com`, password: 'copper kettle under 19 stairs' };
 
@@ -34,11 +28,7 @@ beforeAll(async () => {
   server = await startBuiltServer({ NODE_ENV: 'development' });
   // The server accepts changes only from its public origin, which it names with "localhost".
   base = server.url.replace('//127.0.0.1:', '//localhost:');
-  for (const role of ['admin', 'engineer', 'supplier'] as const) {
-    const line = server.output().match(new RegExp(`^\\s*${role}\\s+(\\S+@\\S+)\\s+(\\S+)\\s+\\((.+)\\)`, 'm'));
-    if (!line) throw new Error(`the server did not print the ${role} demo account:\n${server.output()}`);
-    demo[role] = { email: line[1]!, password: line[2]!, name: line[3]! };
-  }
+  demo = demoAccountsFrom(server.output());
   browser = await launchBrowser();
   problems = await watchContext(browser.context);
   page = browser.context.pages()[0] ?? (await browser.context.newPage());
@@ -58,37 +48,16 @@ async function shoot(name: string, fullPage = true) {
   await page.screenshot({ path: join(artifactsDir, `${name}.png`), fullPage });
 }
 
-
-async function signIn(email: string, password: string) {
-  await page.goto(`${base}/sign-in`, { waitUntil: 'networkidle' });
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
-async function signOut() {
-  await page.getByRole('banner').getByRole('button', { name: 'Sign out' }).click();
-  await page.waitForURL(/\/sign-in\?signedOut=1$/);
-  await page.getByText('You are signed out.').waitFor();
-}
+const signIn = (email: string, password: string) => signInWithForm(page, base, email, password);
+const signOut = () => signOutWithMenu(page);
 
 /** The header's link to the account, named by who is signed in and as what role. */
 function accountLink(name: string, role: string): RegExp {
   return new RegExp(`^Your account: ${name}\\W+signed in as\\W+${role}$`);
 }
 
-async function seriousAxeViolations() {
-  await page.evaluate(axeSource);
-  const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document) => Promise<{ violations: { id: string; impact: string | null; nodes: unknown[] }[] }> } }).axe;
-    return (await axe.run(document)).violations.map((v) => ({ id: v.id, impact: v.impact, count: v.nodes.length }));
-  });
-  return violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
-}
-
-async function pageOverflow(): Promise<number> {
-  return page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth);
-}
+const seriousAxeViolations = () => seriousAxe(page);
+const pageOverflow = () => overflowOf(page);
 
 describe('accounts in the browser', () => {
   it('refuses a weak password beside the field, then signs up and says where the link went', async () => {
