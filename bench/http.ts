@@ -4,8 +4,8 @@ import autocannon from 'autocannon';
 
 /**
  * HTTP section of `npm run bench`: the v1 solve endpoint against two baselines on the same
- * server (a bare Express route, and one behind helmet, JSON parsing and a database rate
- * limit), in alternating order. The goal (solve ≥ 80 % of the middleware baseline's
+ * server (a bare Express route, and one behind helmet, JSON parsing and the same database-backed
+ * rate limit), in alternating order. The goal (solve ≥ 80 % of the middleware baseline's
  * throughput, p99 within 1.5×) is reported, not asserted.
  */
 interface Target {

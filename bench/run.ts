@@ -11,10 +11,13 @@ function table(rows: string[][]): string {
 }
 
 console.log(`Pinwork benchmark — Node ${process.version}, ${new Date().toISOString()}\n`);
-console.log('Engine\n');
-const engine = benchEngine();
-console.log(table(engine.rows));
-console.log(`\nEngine goals: ${engine.pass ? 'all met' : 'some missed'}`);
+// --http-only skips the engine section; --no-http skips the HTTP one.
+if (!process.argv.includes('--http-only')) {
+  console.log('Engine\n');
+  const engine = benchEngine();
+  console.log(table(engine.rows));
+  console.log(`\nEngine goals: ${engine.pass ? 'all met' : 'some missed'}`);
+}
 
 if (!process.argv.includes('--no-http')) {
   console.log('\nHTTP\n');

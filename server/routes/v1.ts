@@ -25,7 +25,7 @@ import type { UsageRecorder } from '../services/api-keys/usage-recorder';
 import { openApiDocument } from '../services/api-v1/openapi-document';
 import { defaultSpecCheckLimits, solveSpecForApi, validateSpecForApi, type SpecCheckLimits } from '../services/api-v1/spec-check';
 import type { V1Catalogue } from '../services/api-v1/v1-catalogue';
-import { DatabaseRateLimitStore } from '../services/rate-limit-store';
+import { BatchedRateLimitStore } from '../services/batched-rate-limit-store';
 import { expressPath, v1Operations, type V1Operation } from './v1-operations';
 
 export interface V1Limits {
@@ -33,10 +33,12 @@ export interface V1Limits {
   windowMs: number;
   /** Requests per window for a key without its own figure. */
   perWindow: number;
+  /** How often each instance adds its rate-limit counts to the shared ones (see BatchedRateLimitStore). */
+  rateSyncMs: number;
   spec: SpecCheckLimits;
 }
 
-export const defaultV1Limits: V1Limits = { windowMs: 60_000, perWindow: 600, spec: defaultSpecCheckLimits };
+export const defaultV1Limits: V1Limits = { windowMs: 60_000, perWindow: 600, rateSyncMs: 100, spec: defaultSpecCheckLimits };
 
 export interface V1Deps {
   db: Database;
@@ -78,11 +80,17 @@ export function v1Router(deps: V1Deps): express.Router {
   const document = openApiDocument(v1Operations, deps.version);
   const specSchema = specJsonSchema();
 
+  const limitOf = (req: Request) => apiKeyOf(req).ratePerMinute ?? limits.perWindow;
+  const limitStore = new BatchedRateLimitStore(deps.db, 'api-v1:', { syncMs: limits.rateSyncMs, logger: deps.logger });
   const limiter = rateLimit({
     windowMs: limits.windowMs,
-    limit: (req) => apiKeyOf(req).ratePerMinute ?? limits.perWindow,
-    keyGenerator: (req) => apiKeyOf(req).id,
-    store: new DatabaseRateLimitStore(deps.db, 'api-v1:'),
+    limit: limitOf,
+    keyGenerator: (req) => {
+      // The store syncs each of a key's last hits before its limit, so it needs the limit first.
+      limitStore.noteLimit(apiKeyOf(req).id, limitOf(req));
+      return apiKeyOf(req).id;
+    },
+    store: limitStore,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     // The key is the identity here, not the address; nothing about req.ip to validate.
@@ -93,7 +101,7 @@ export function v1Router(deps: V1Deps): express.Router {
           type: apiProblemTypes.rateLimited,
           title: 'Too many requests',
           status: 429,
-          detail: `Key ${apiKeyOf(req).prefix} has made more than ${apiKeyOf(req).ratePerMinute ?? limits.perWindow} requests in ${Math.round(limits.windowMs / 1000)} s; wait for Retry-After seconds.`,
+          detail: `Key ${apiKeyOf(req).prefix} has made more than ${limitOf(req)} requests in ${Math.round(limits.windowMs / 1000)} s; wait for Retry-After seconds.`,
         }),
       ),
   });
