@@ -50,6 +50,8 @@ describe('quota in words', () => {
   it('says used, quota, share and what is left', () => {
     expect(quotaWords({ used: 12_345, quota: 100_000 })).toBe('12,345 calls of 100,000 this month (12%); 87,655 left.');
     expect(quotaWords({ used: 1, quota: 10 })).toBe('1 call of 10 this month (10%); 9 left.');
+    expect(quotaWords({ used: 4, quota: 100_000 })).toBe('4 calls of 100,000 this month (under 1%); 99,996 left.');
+    expect(quotaWords({ used: 0, quota: 100_000 })).toBe('0 calls of 100,000 this month (0%); 100,000 left.');
   });
   it('says when the quota is used up and when there is none, and nothing for the admin view', () => {
     expect(quotaWords({ used: 10, quota: 10 })).toMatch(/quota of 10 is used up; calls are refused until the first of next month/);

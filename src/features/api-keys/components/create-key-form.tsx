@@ -42,6 +42,8 @@ export function CreateKeyForm({ owner, onCreated, onCancel }: { owner: KeyOwner;
   const create = useCreateKey(owner);
   const server = formErrorsFrom(create.error);
   const errors = { ...server.fields, ...localErrors };
+  // A field's own message goes as soon as it is edited; the rest stay until the next try.
+  const edited = (field: string) => setLocalErrors(({ [field]: _gone, ...rest }) => rest);
   const id = useId();
 
   const submit = (event: FormEvent) => {
@@ -63,7 +65,10 @@ export function CreateKeyForm({ owner, onCreated, onCancel }: { owner: KeyOwner;
     create.mutate(parsed.data, { onSuccess: onCreated });
   };
 
-  const toggleScope = (scope: ApiScope, on: boolean) => setScopes((now) => (on ? [...new Set([...now, scope])] : now.filter((s) => s !== scope)));
+  const toggleScope = (scope: ApiScope, on: boolean) => {
+    edited('scopes');
+    setScopes((now) => (on ? [...new Set([...now, scope])] : now.filter((s) => s !== scope)));
+  };
   const today = new Date();
   const tomorrow = new Date(today.getFullYear(), today.getMonth(), today.getDate() + 1);
   const minDay = `${tomorrow.getFullYear()}-${String(tomorrow.getMonth() + 1).padStart(2, '0')}-${String(tomorrow.getDate()).padStart(2, '0')}`;
@@ -75,7 +80,7 @@ export function CreateKeyForm({ owner, onCreated, onCancel }: { owner: KeyOwner;
           {server.summary}
         </Notice>
       )}
-      <TextField label="Name" name="name" value={name} maxLength={80} autoComplete="off" onChange={(e) => setName(e.target.value)}
+      <TextField label="Name" name="name" value={name} maxLength={80} autoComplete="off" onChange={(e) => { setName(e.target.value); edited('name'); }}
         error={withFieldName('Name', errors.name)} hint="What uses it, e.g. “Quoting tool” or “Shop product pages”." />
 
       <fieldset>
@@ -116,7 +121,7 @@ export function CreateKeyForm({ owner, onCreated, onCancel }: { owner: KeyOwner;
           <label htmlFor={`${id}-origins`} className="block text-sm font-bold text-ink-900">
             Allowed origins
           </label>
-          <textarea id={`${id}-origins`} rows={3} value={origins} onChange={(e) => setOrigins(e.target.value)} className={`${inputClass} mt-1.5 font-mono text-sm`}
+          <textarea id={`${id}-origins`} rows={3} value={origins} onChange={(e) => { setOrigins(e.target.value); edited('allowedOrigins'); }} className={`${inputClass} mt-1.5 font-mono text-sm`}
             aria-invalid={errors.allowedOrigins ? true : undefined}
             aria-describedby={`${id}-origins-hint${errors.allowedOrigins ? ` ${id}-origins-error` : ''}`}
             placeholder="https://shop.example.com" />
@@ -126,10 +131,10 @@ export function CreateKeyForm({ owner, onCreated, onCancel }: { owner: KeyOwner;
       )}
 
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Expires after (optional)" type="date" min={minDay} value={expiry} onChange={(e) => setExpiry(e.target.value)}
+        <TextField label="Expires after (optional)" type="date" min={minDay} value={expiry} onChange={(e) => { setExpiry(e.target.value); edited('expiresAt'); }}
           error={withFieldName('The expiry', errors.expiresAt)} hint="Empty: until you revoke it." />
         <TextField label="Calls a minute (optional)" type="number" inputMode="numeric" min={1} max={100000} step={1} value={rate}
-          onChange={(e) => setRate(e.target.value)} error={withFieldName('Calls a minute', errors.ratePerMinute)} hint="Empty: the standard 600." />
+          onChange={(e) => { setRate(e.target.value); edited('ratePerMinute'); }} error={withFieldName('Calls a minute', errors.ratePerMinute)} hint="Empty: the standard 600." />
       </div>
 
       <div className="flex flex-wrap justify-end gap-3">

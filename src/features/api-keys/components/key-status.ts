@@ -5,8 +5,10 @@ export type KeyState = 'active' | 'rotating' | 'revoked' | 'expired';
 
 export interface KeyStatus {
   state: KeyState;
-  /** The words in the table: "Active", "Rotating until 3 Dec 2026, 10:00", "Revoked", "Expired". */
+  /** The whole phrase: "Active", "Rotating until 3 Dec 2026, 10:00", "Revoked 1 Dec 2026, 09:30", "Expired …". */
   label: string;
+  /** The part after the state's name ("until …", the moment), shown on its own line; empty for an active key. */
+  detail: string;
 }
 
 export const keyStateNames: Record<KeyState, string> = {
@@ -23,11 +25,12 @@ const passed = (iso: string | null, now: Date) => iso !== null && Date.parse(iso
  * end of its grace period, which the server stores as its expiry; after that it is expired.
  */
 export function keyStatus(key: ApiKeyInfo, all: readonly ApiKeyInfo[], now = new Date()): KeyStatus {
-  if (passed(key.revokedAt, now)) return { state: 'revoked', label: `Revoked ${formatDateTime(key.revokedAt)}` };
-  if (passed(key.expiresAt, now)) return { state: 'expired', label: `Expired ${formatDateTime(key.expiresAt)}` };
+  const status = (state: KeyState, detail: string): KeyStatus => ({ state, detail, label: detail ? `${keyStateNames[state]} ${detail}` : keyStateNames[state] });
+  if (passed(key.revokedAt, now)) return status('revoked', formatDateTime(key.revokedAt));
+  if (passed(key.expiresAt, now)) return status('expired', formatDateTime(key.expiresAt));
   const replaced = all.some((k) => k.rotatedFromId === key.id);
-  if (replaced && key.expiresAt) return { state: 'rotating', label: `Rotating until ${formatDateTime(key.expiresAt)}` };
-  return { state: 'active', label: 'Active' };
+  if (replaced && key.expiresAt) return status('rotating', `until ${formatDateTime(key.expiresAt)}`);
+  return status('active', '');
 }
 
 export const kindNames = { secret: 'Secret', publishable: 'Publishable' } as const;

@@ -1,7 +1,7 @@
 import type { ApiKeyInfo } from '../../../../shared/api/v1';
 import { secondaryButtonClass } from '../../../components/form-styles';
 import { formatDateTime } from '../../../lib/format-time';
-import { kindNames, keyStatus, scopeNames, type KeyState, type KeyStatus } from './key-status';
+import { keyStateNames, keyStatus, kindNames, scopeNames, type KeyState, type KeyStatus } from './key-status';
 import { rowClass, tableClass, tableWrapClass, tdClass, theadClass, thClass } from './key-table-styles';
 
 const stateLook: Record<KeyState, { box: string; mark: string }> = {
@@ -14,9 +14,12 @@ const stateLook: Record<KeyState, { box: string; mark: string }> = {
 export function StatusTag({ status }: { status: KeyStatus }) {
   const look = stateLook[status.state];
   return (
-    <span className={`inline-flex items-start gap-1 rounded-xl px-2 py-0.5 text-xs font-bold ${look.box}`} data-key-state={status.state}>
-      <span aria-hidden="true">{look.mark}</span>
-      <span>{status.label}</span>
+    <span className="inline-grid justify-items-start gap-0.5" data-key-state={status.state}>
+      <span className={`inline-flex items-center gap-1 rounded-full px-2 py-0.5 text-xs font-bold whitespace-nowrap ${look.box}`}>
+        <span aria-hidden="true">{look.mark}</span>
+        {keyStateNames[status.state]}
+      </span>
+      {status.detail && <span className="text-xs text-ink-700">{status.detail}</span>}
     </span>
   );
 }
@@ -71,25 +74,24 @@ const ownerName = (k: ApiKeyInfo, names: Record<string, string> | undefined) =>
   k.organisationId === null ? 'Administrator’s own' : (names?.[k.organisationId] ?? 'Unknown organisation');
 
 /**
- * The keys as a table from medium widths up and as a list of cards below, so a phone reads every
+ * The keys as a table from large widths up and as a list of cards below, so a phone reads every
  * field without scrolling sideways. Only one of the two is displayed (the other is display:none,
  * so it is also hidden from assistive technology).
  */
 export function KeyTable({ keys, all = keys, caption, canManage, organisationNames, onRotate, onRevoke, now = new Date() }: KeyTableProps) {
   const admin = organisationNames !== undefined;
   const rows = keys.map((k) => ({ k, status: keyStatus(k, all, now) }));
-  const columns = 9 + (admin ? 1 : 0) + (canManage ? 1 : 0);
+  const columns = 8 + (admin ? 1 : 0) + (canManage ? 1 : 0);
   return (
     <>
-      <div className={`${tableWrapClass} hidden md:block`}>
-        <table className={`${tableClass} min-w-[56rem]`}>
+      <div className={`${tableWrapClass} hidden lg:block`}>
+        <table className={`${tableClass} min-w-[58rem]`}>
           <caption className="sr-only">{caption}</caption>
           <thead className={theadClass}>
             <tr>
               <th scope="col" className={thClass}>Name</th>
               {admin && <th scope="col" className={thClass}>Organisation</th>}
               <th scope="col" className={thClass}>Kind</th>
-              <th scope="col" className={thClass}>Starts with</th>
               <th scope="col" className={thClass}>Scopes</th>
               <th scope="col" className={thClass}>Origins</th>
               <th scope="col" className={thClass}>Created</th>
@@ -113,15 +115,20 @@ export function KeyTable({ keys, all = keys, caption, canManage, organisationNam
             )}
             {rows.map(({ k, status }) => (
               <tr key={k.id} className={rowClass} data-key-prefix={k.prefix}>
-                <th scope="row" className={`${tdClass} text-left font-bold text-ink-950`}>{k.name}</th>
+                <th scope="row" className={`${tdClass} text-left`}>
+                  <span className="block font-bold text-ink-950">{k.name}</span>
+                  <span className="block font-mono text-xs font-normal whitespace-nowrap text-ink-800">
+                    <span className="sr-only">starts with </span>
+                    {k.prefix}…
+                  </span>
+                </th>
                 {admin && <td className={tdClass}>{ownerName(k, organisationNames)}</td>}
                 <td className={tdClass}>{kindNames[k.kind]}</td>
-                <td className={`${tdClass} font-mono text-xs whitespace-nowrap`}>{k.prefix}…</td>
                 <td className={tdClass}><Scopes k={k} /></td>
                 <td className={tdClass}><Origins k={k} /></td>
-                <td className={`${tdClass} whitespace-nowrap`}>{formatDateTime(k.createdAt)}</td>
-                <td className={`${tdClass} whitespace-nowrap`}>{k.expiresAt ? formatDateTime(k.expiresAt) : 'Never'}</td>
-                <td className={`${tdClass} whitespace-nowrap`} data-last-used>{k.lastUsedAt ? formatDateTime(k.lastUsedAt) : 'Not yet'}</td>
+                <td className={tdClass}>{formatDateTime(k.createdAt)}</td>
+                <td className={tdClass}>{k.expiresAt ? formatDateTime(k.expiresAt) : 'Never'}</td>
+                <td className={tdClass} data-last-used>{k.lastUsedAt ? formatDateTime(k.lastUsedAt) : 'Not yet'}</td>
                 <td className={tdClass}><StatusTag status={status} /></td>
                 {canManage && (
                   <td className={tdClass}>
@@ -134,7 +141,7 @@ export function KeyTable({ keys, all = keys, caption, canManage, organisationNam
         </table>
       </div>
 
-      <ul className="grid gap-3 md:hidden" aria-label={caption}>
+      <ul className="grid gap-3 sm:grid-cols-2 lg:hidden" aria-label={caption}>
         {rows.length === 0 && <li className="rounded-xl border border-ink-100 p-4 text-sm text-ink-700">No key here.</li>}
         {rows.map(({ k, status }) => (
           <li key={k.id} className="rounded-xl border border-ink-100 bg-paper-50 p-4" data-key-prefix={k.prefix}>

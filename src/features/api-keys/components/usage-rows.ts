@@ -78,7 +78,8 @@ export function quotaWords(monthly: UsageReport['monthly']): string | null {
   const used = `${formatCount(monthly.used)} ${monthly.used === 1 ? 'call' : 'calls'}`;
   if (monthly.quota === null) return `${used} this month; this organisation has no monthly quota.`;
   const left = Math.max(0, monthly.quota - monthly.used);
-  const percent = monthly.quota > 0 ? Math.min(100, Math.round((monthly.used / monthly.quota) * 100)) : 100;
+  const share = monthly.quota > 0 ? (monthly.used / monthly.quota) * 100 : 100;
+  const percent = monthly.used > 0 && share < 1 ? 'under 1' : String(Math.min(100, Math.round(share)));
   if (left === 0) return `${used} this month: the monthly quota of ${formatCount(monthly.quota)} is used up; calls are refused until the first of next month.`;
   return `${used} of ${formatCount(monthly.quota)} this month (${percent}%); ${formatCount(left)} left.`;
 }
