@@ -3,7 +3,7 @@ import { cardClass, primaryButtonClass, secondaryButtonClass } from '../../compo
 import { Page } from '../../components/page';
 import { useSignedIn } from '../use-signed-in';
 
-/** The supplier's start page: their organisation now, embeds and API keys when those arrive. */
+/** The supplier's start page: their organisation with its API keys, the API reference, the library. */
 export function SupplierHomeRoute() {
   const me = useSignedIn();
   const organisation = me.organisations[0];
@@ -14,7 +14,7 @@ export function SupplierHomeRoute() {
           <h2 className="text-lg font-extrabold">Your organisation</h2>
           <p className="mt-2 text-sm leading-relaxed text-ink-800">
             {organisation
-              ? `You are ${organisation.role === 'owner' ? 'an owner' : 'a member'} of ${organisation.name}. See who else is in it and invite colleagues by e-mail.`
+              ? `You are ${organisation.role === 'owner' ? 'an owner' : 'a member'} of ${organisation.name}. See who else is in it, invite colleagues by e-mail and manage its API keys.`
               : 'You are not in an organisation yet. An owner can invite you by e-mail.'}
           </p>
           <Link to="/organisation" className={`${primaryButtonClass} mt-5`}>
@@ -22,14 +22,19 @@ export function SupplierHomeRoute() {
           </Link>
         </div>
         <div className={cardClass}>
-          <h2 className="text-lg font-extrabold">Embedded calculators and API keys</h2>
+          <h2 className="text-lg font-extrabold">Results in your own systems</h2>
           <p className="mt-2 text-sm leading-relaxed text-ink-800">
-            Putting a calculator on your own website and holding API keys arrive in a later build. The published templates
-            can be tried in the library today.
+            Your organisation's API keys, their calls and limits are on its page; the reference shows every endpoint with examples you
+            can run. Putting a calculator on your own website comes in a later build.
           </p>
-          <Link to="/templates" className={`${secondaryButtonClass} mt-5`}>
-            Open the template library
-          </Link>
+          <div className="mt-5 flex flex-wrap gap-3">
+            <Link to="/developers/api" className={secondaryButtonClass}>
+              API reference
+            </Link>
+            <Link to="/templates" className={secondaryButtonClass}>
+              Template library
+            </Link>
+          </div>
         </div>
       </div>
     </Page>
