@@ -65,6 +65,10 @@ async function main(): Promise<void> {
     const lines = running.demoAccounts.map((a) => `  ${a.role.padEnd(9)} ${a.email.padEnd(36)} ${a.password}   (${a.name})`);
     process.stdout.write(`Demo accounts (development only):\n${lines.join('\n')}\n`);
   }
+  if (running.demoApiKey) {
+    const k = running.demoApiKey;
+    process.stdout.write(`Demo API key (development only, ${k.organisation}; scopes ${k.scopes.join(', ')}):\n  ${k.key}\n  API reference with this key filled in: ${running.url}/developers/api\n`);
+  }
   if (stopRequested) stop(running, stopRequested);
 }
 

@@ -9,8 +9,10 @@ import { lockDataFolder, type DataFolderLock } from './db/data-folder-lock';
 import type { DatabaseHandle } from './db/database';
 import { seedDemoData } from './db/seed';
 import { seedDemoAccounts, type DemoAccount } from './db/seed-demo-accounts';
+import { demoApiKeyAtStart } from './db/seed-demo-key';
 import { seedBuiltInTemplates } from './db/seed-templates';
 import { builtInTemplates } from '../templates/registry';
+import type { DemoApiKey } from '../shared/api/demo-key';
 import { recordAudit } from './services/audit';
 import { authSecretFor } from './services/auth/secret';
 import { startMailDelivery, type MailDelivery } from './services/mail/mail-delivery';
@@ -24,6 +26,8 @@ export interface RunningServer {
   port: number;
   /** Development only: the seeded demo sign-ins, for the start message. */
   demoAccounts: DemoAccount[];
+  /** Development only: the seeded demo API key, for the start message. */
+  demoApiKey: DemoApiKey | null;
   /** Stops accepting, lets in-flight requests finish, then closes the database and the lock. */
   stop(reason: string): Promise<void>;
 }
@@ -59,6 +63,8 @@ export async function startServer(
     });
 
     const demoAccounts = config.mode === 'development' ? (await seedDemoAccounts(database.db)).accounts : [];
+    const demoKey = await demoApiKeyAtStart(database.db, config.mode);
+    if (demoKey.retired) logger.warn('revoked the development demo API key found in this database: production never accepts it');
     mail = await startMailDelivery(database.db, logger, config);
 
     let listeningUrl = '';
@@ -112,7 +118,7 @@ export async function startServer(
       })();
       return stopping;
     };
-    return { url, port, demoAccounts, stop };
+    return { url, port, demoAccounts, demoApiKey: demoKey.key, stop };
   } catch (error) {
     await mail?.stop().catch(() => undefined);
     await database?.close().catch(() => undefined);

@@ -11,7 +11,10 @@ import {
   mailQuerySchema,
   tokenSchema,
 } from '../../shared/api/auth';
+import type { DemoApiKey } from '../../shared/api/demo-key';
+import { problemTypes } from '../../shared/api/problem';
 import { signedIn } from '../middleware/auth-guards';
+import { HttpProblem } from '../middleware/http-problem';
 import { parseOrThrow } from '../middleware/validate';
 import type { AccountService } from '../services/accounts';
 import type { AuditLogService } from '../services/audit-log';
@@ -25,6 +28,8 @@ export interface AccountRouteServices {
   organisations: OrganisationService;
   auditLog: AuditLogService;
   devMail: DevMailService;
+  /** The seeded demo API key while it is live (development databases only). */
+  demoApiKey: () => Promise<DemoApiKey | null>;
 }
 
 const idParam = z.string().min(1, 'must not be empty').max(200, 'is too long');
@@ -119,6 +124,12 @@ export function accountHandlers(s: AccountRouteServices): Omit<RouteHandlers, Ap
     'dev.mail.get': async (req, res) => {
       res.setHeader('Cache-Control', 'no-store');
       res.json(await s.devMail.get(parseOrThrow(mailIdParam, req.params.mailId)));
+    },
+    'dev.demoKey.get': async (_req, res) => {
+      res.setHeader('Cache-Control', 'no-store');
+      const key = await s.demoApiKey();
+      if (!key) throw new HttpProblem({ type: problemTypes.notFound, title: 'No demo key', status: 404, detail: 'No live demo API key here: it is seeded at a development start and stays away once revoked.' });
+      res.json(key);
     },
     'dev.mail.html': async (req, res) => {
       const message = await s.devMail.get(parseOrThrow(mailIdParam, req.params.mailId));

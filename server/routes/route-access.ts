@@ -63,6 +63,9 @@ export const routeTable = [
   { id: 'dev.mail.list', method: 'GET', path: '/dev/mail', access: adminOnly, devOnly: true },
   { id: 'dev.mail.get', method: 'GET', path: '/dev/mail/:mailId', access: adminOnly, devOnly: true },
   { id: 'dev.mail.html', method: 'GET', path: '/dev/mail/:mailId/html', access: adminOnly, devOnly: true },
+  // Public, unlike the outbox: the demo key is printed at start and listed in README.md anyway,
+  // opens only the demo supplier's API, and the reference page (public) fills it in for visitors.
+  { id: 'dev.demoKey.get', method: 'GET', path: '/dev/demo-key', access: { kind: 'public' }, devOnly: true },
 ] as const satisfies readonly AccessRule[];
 
 export type RouteId = (typeof routeTable)[number]['id'];

@@ -2,6 +2,7 @@ import { randomBytes } from 'node:crypto';
 import type { Logger } from 'pino';
 import type { ServerMode } from '../../config';
 import type { Database } from '../../db/database';
+import { liveDemoApiKey } from '../../db/seed-demo-key';
 import { accessControlledRouter } from '../../routes/access-router';
 import { accountHandlers } from '../../routes/account-handlers';
 import { apiKeyHandlers } from '../../routes/api-key-handlers';
@@ -65,7 +66,7 @@ export function createAccountSystem(db: Database, logger: Logger, options: Accou
     authRouter: authFrontRouter({ auth, db, accounts, publicUrl, limits: rateLimits, origins }),
     apiRouter: accessControlledRouter(
       {
-        ...accountHandlers({ accounts, organisations, auditLog: new AuditLogService(db), devMail: new DevMailService(db) }),
+        ...accountHandlers({ accounts, organisations, auditLog: new AuditLogService(db), devMail: new DevMailService(db), demoApiKey: () => liveDemoApiKey(db) }),
         ...apiKeyHandlers({ apiKeys: options.apiKeys ?? new ApiKeyService(db), usageReports: options.usageReports ?? new UsageReportService(db, null) }),
       },
       { auth, db, mode: options.mode, origins },
