@@ -21,6 +21,8 @@ function RootLayout() {
 }
 
 const calculatorRoute = () => import('./routes/calculator').then((m) => ({ Component: m.CalculatorRoute }));
+// Swagger UI is most of this page's weight: it loads only when someone opens the reference.
+const apiReferenceRoute = () => import('./routes/api-reference').then((m) => ({ Component: m.ApiReferenceRoute }));
 
 export const router = createBrowserRouter([
   {
@@ -36,6 +38,7 @@ export const router = createBrowserRouter([
       // The library's first address, kept so old links still arrive.
       { path: 'library', element: <Navigate to="/templates" replace /> },
       { path: 'how-it-works', element: <HowItWorksRoute /> },
+      { path: 'developers/api', lazy: apiReferenceRoute },
       ...accountRoutes,
       { path: '*', element: <NotFoundRoute /> },
     ],

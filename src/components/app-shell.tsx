@@ -69,7 +69,12 @@ export function AppShell({ children, roleNavItems = [], account }: AppShellProps
       <footer className="border-t border-paper-300 bg-paper-200">
         <div className="mx-auto max-w-page px-4 py-6 text-xs leading-relaxed text-ink-800 sm:px-6">
           <SafetyNote compact />
-          <p className="mt-2 font-semibold text-ink-700">Pinwork · statics templates for lifting, workholding and frames</p>
+          <p className="mt-2 font-semibold text-ink-700">
+            Pinwork · statics templates for lifting, workholding and frames ·{' '}
+            <Link to="/developers/api" className="underline decoration-ink-300 underline-offset-2 hover:text-ink-900">
+              API reference
+            </Link>
+          </p>
         </div>
       </footer>
     </div>
