@@ -34,6 +34,8 @@ export interface V1Operation {
   response: z.ZodType | null;
   /** A request that succeeds on a fresh server with the built-in templates. */
   example: { path: string; body?: unknown };
+  /** With `Accept: image/svg+xml` the same request answers a ready chart (chart-svg.ts). */
+  chart?: 'sweep' | 'tornado';
 }
 
 const slugExample = 'wall-jib-tie-rod';
@@ -79,6 +81,7 @@ export const v1Operations: V1Operation[] = [
     etag: true,
     body: v1SweepRequestSchema,
     response: v1SweepResponseSchema,
+    chart: 'sweep',
     example: { path: `/templates/${slugExample}/sweep`, body: { inputs: {}, sweep: { input: 'L', from: 2000, to: 6000, steps: 5 } } },
   },
   {
@@ -90,6 +93,7 @@ export const v1Operations: V1Operation[] = [
     etag: true,
     body: v1SensitivityRequestSchema,
     response: v1SensitivityResponseSchema,
+    chart: 'tornado',
     example: { path: `/templates/${slugExample}/sensitivity`, body: { inputs: {}, tornado: { result: 'T', percent: 10 } } },
   },
   {

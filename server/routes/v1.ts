@@ -22,6 +22,8 @@ import { HttpProblem, sendProblem } from '../middleware/http-problem';
 import { parseOrThrow } from '../middleware/validate';
 import type { ApiKeyService } from '../services/api-keys/api-keys';
 import type { UsageRecorder } from '../services/api-keys/usage-recorder';
+import { chartFormat, chartIdentity, chartTagPart, sendSvg } from '../services/api-v1/chart-negotiation';
+import { chartRenderer } from '../services/api-v1/chart-renderer';
 import { openApiDocument } from '../services/api-v1/openapi-document';
 import { defaultSpecCheckLimits, solveSpecForApi, validateSpecForApi, type SpecCheckLimits } from '../services/api-v1/spec-check';
 import type { V1Catalogue } from '../services/api-v1/v1-catalogue';
@@ -129,18 +131,26 @@ export function v1Router(deps: V1Deps): express.Router {
       res.json(await catalogue.solve(slug, v.row.semver, b.inputs, b.units));
     },
     sweepTemplate: async (req, res) => {
+      const format = chartFormat(req, res);
       const slug = slugOf(req);
       const b = parseOrThrow(v1SweepRequestSchema, body(req));
       const v = await catalogue.resolve(slug, b.version);
-      if (notModified(req, res, etagFor(v.row.contentHash, { op: 'sweep', inputs: b.inputs, units: b.units, sweep: b.sweep }))) return;
-      res.json(await catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units));
+      const tag = etagFor(v.row.contentHash, { op: 'sweep', inputs: b.inputs, units: b.units, sweep: b.sweep, ...chartTagPart(format) });
+      if (notModified(req, res, tag)) return;
+      const out = await catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units);
+      if (format === 'json') return void res.json(out);
+      sendSvg(res, await chartRenderer.sweep(tag, chartIdentity(v, b.units), out.sweep), `${slug}-${out.version}-sweep-${b.sweep.input}.svg`);
     },
     sensitivityTemplate: async (req, res) => {
+      const format = chartFormat(req, res);
       const slug = slugOf(req);
       const b = parseOrThrow(v1SensitivityRequestSchema, body(req));
       const v = await catalogue.resolve(slug, b.version);
-      if (notModified(req, res, etagFor(v.row.contentHash, { op: 'sensitivity', inputs: b.inputs, units: b.units, tornado: b.tornado }))) return;
-      res.json(await catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units));
+      const tag = etagFor(v.row.contentHash, { op: 'sensitivity', inputs: b.inputs, units: b.units, tornado: b.tornado, ...chartTagPart(format) });
+      if (notModified(req, res, tag)) return;
+      const out = await catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units);
+      if (format === 'json') return void res.json(out);
+      sendSvg(res, await chartRenderer.tornado(tag, chartIdentity(v, b.units), out.tornado), `${slug}-${out.version}-sensitivity-${b.tornado.result}.svg`);
     },
     specSchema: (_req, res) => {
       res.setHeader('Cache-Control', 'public, max-age=300');

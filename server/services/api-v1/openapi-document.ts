@@ -3,6 +3,7 @@ import { problemSchema } from '../../../shared/api/problem';
 import { engineProblemTypes } from '../../../shared/api/templates';
 import { apiProblemTypes, apiScopes, v1Limits } from '../../../shared/api/v1';
 import type { V1Operation } from '../../routes/v1-operations';
+import { notAcceptableType } from './chart-negotiation';
 
 type JsonObject = Record<string, unknown>;
 
@@ -16,6 +17,24 @@ const problemResponse = (description: string) => ({
   description,
   content: { 'application/problem+json': { schema: { $ref: '#/components/schemas/Problem' } } },
 });
+
+const chartHeaders = {
+  Vary: { schema: { type: 'string' }, description: 'Accept: JSON and SVG answers of one request are cached apart (their ETags differ too)' },
+};
+
+function chartContent(kind: 'sweep' | 'tornado'): JsonObject {
+  const what =
+    kind === 'sweep'
+      ? 'the chosen results as lines against the swept input; steps that cannot be built are a shaded gap with the reason below'
+      : 'one bar per input between the result with that input moved down and up, and the value as set';
+  return {
+    schema: {
+      type: 'string',
+      contentMediaType: 'image/svg+xml',
+      description: `A standalone SVG 1.1 document (800 px wide) drawn with the app's chart: title, axes with units in the request's unit system, legend, ${what}; the footer names the template, version and spec hash. No scripts, fonts or other external references.`,
+    },
+  };
+}
 
 /**
  * The OpenAPI 3.1 document of the public API, built from the operation list and its zod
@@ -36,11 +55,15 @@ export function openApiDocument(operations: readonly V1Operation[], version: str
     if (op.etag) parameters.push({ name: 'If-None-Match', in: 'header', required: false, schema: { type: 'string' }, description: 'An ETag from an earlier identical request' });
     const responses: JsonObject = {
       '200': {
-        description: 'OK',
-        ...(op.etag ? { headers: { ETag: { schema: { type: 'string' }, description: 'Hash of the spec and the request' } } } : {}),
-        content: { 'application/json': { schema: op.response ? schemaOf(op.response, 'output') : { type: 'object' } } },
+        description: op.chart ? 'OK: the data as JSON, or with `Accept: image/svg+xml` a ready chart' : 'OK',
+        ...(op.etag || op.chart ? { headers: { ...(op.etag ? { ETag: { schema: { type: 'string' }, description: 'Hash of the spec and the request' } } : {}), ...(op.chart ? chartHeaders : {}) } } : {}),
+        content: {
+          'application/json': { schema: op.response ? schemaOf(op.response, 'output') : { type: 'object' } },
+          ...(op.chart ? { 'image/svg+xml': chartContent(op.chart) } : {}),
+        },
       },
     };
+    if (op.chart) responses['406'] = problemResponse('The Accept header allows neither application/json nor image/svg+xml');
     if (op.etag) responses['304'] = { description: 'Not modified: the ETag in If-None-Match still holds' };
     if (op.scope) {
       responses['401'] = problemResponse('Key missing, invalid, revoked or expired');
@@ -65,7 +88,7 @@ export function openApiDocument(operations: readonly V1Operation[], version: str
     };
     (paths[op.path] ??= {})[op.method] = operation;
   }
-  const types = { ...engineProblemTypes, ...apiProblemTypes };
+  const types = { ...engineProblemTypes, ...apiProblemTypes, notAcceptable: notAcceptableType };
   return {
     openapi: '3.1.0',
     info: {

@@ -1,0 +1,55 @@
+import type { SweepOutput, TornadoOutput } from '../../../shared/mechanics/sensitivity-schema';
+import { sweepSvg, tornadoSvg, type ChartIdentity } from './chart-svg';
+import { ChartWorkerPool } from './chart-worker-pool';
+
+/** Bump when the look of a chart document changes, so an old ETag stops matching. */
+export const CHART_LAYOUT_REVISION = 1;
+
+/**
+ * SVG answers of the public API. A chart of a published version is a pure function of the
+ * spec and the request, so documents are kept by their ETag: a product page that shows the
+ * same chart to every visitor costs one render.
+ */
+export class ChartRenderer {
+  private readonly cache = new Map<string, Promise<string>>();
+
+  constructor(
+    private readonly pool = new ChartWorkerPool(),
+    private readonly cacheSize = 200,
+  ) {}
+
+  private remember(key: string, make: () => Promise<string>): Promise<string> {
+    const hit = this.cache.get(key);
+    if (hit) {
+      // Most recently used last, so the oldest is the first key.
+      this.cache.delete(key);
+      this.cache.set(key, hit);
+      return hit;
+    }
+    const made = make();
+    this.cache.set(key, made);
+    made.catch(() => this.cache.delete(key));
+    while (this.cache.size > this.cacheSize) this.cache.delete(this.cache.keys().next().value!);
+    return made;
+  }
+
+  sweep(key: string, id: ChartIdentity, sweep: SweepOutput): Promise<string> {
+    return this.remember(key, () => sweepSvg(this.pool, id, sweep));
+  }
+
+  tornado(key: string, id: ChartIdentity, tornado: TornadoOutput): Promise<string> {
+    return this.remember(key, () => tornadoSvg(this.pool, id, tornado));
+  }
+
+  /** Starts the worker ahead of the first chart (it takes a few seconds to load). */
+  warm(): Promise<void> {
+    return this.pool.warm();
+  }
+
+  close(): Promise<void> {
+    return this.pool.close();
+  }
+}
+
+/** One per process: the worker thread and the cache serve every app instance alike. */
+export const chartRenderer = new ChartRenderer();
