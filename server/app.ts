@@ -43,8 +43,15 @@ export function createApp(options: AppOptions): express.Express {
   app.set('trust proxy', options.trustProxy ?? false);
 
   app.use(securityHeaders());
-  // Bundles, validator scripts and solve results shrink to a third or less with gzip.
-  app.use(compression());
+  // Bundles, validator scripts and solve results shrink to a third or less with gzip. A request
+  // that accepts no compression would only be answered as is, so it skips compression's
+  // per-response wrapping (server-to-server API calls often ask for none).
+  const compress = compression();
+  app.use((req, res, next) => {
+    if (/\b(gzip|deflate|br)\b/i.test(req.headers['accept-encoding'] ?? '')) return compress(req, res, next);
+    res.vary('Accept-Encoding');
+    next();
+  });
   app.use(requestLogging(logger));
   const v1 = options.apiV1 ?? {};
   const apiKeys = new ApiKeyService(database.db, { cacheMs: v1.keyCacheMs });
@@ -65,7 +72,7 @@ export function createApp(options: AppOptions): express.Express {
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
 
   const api = express.Router();
-  api.use(healthRouter(database, options.version ?? appVersion));
+  api.use(healthRouter(database, options.version ?? appVersion, options.accounts?.mode ?? 'test'));
   api.use(templateRoutes(new TemplateCatalogue(templateStore)));
   api.use(accountSystem.apiRouter);
   api.use(apiNotFound);

@@ -1,4 +1,4 @@
-import { createHash } from 'node:crypto';
+import { hash } from 'node:crypto';
 import express, { type Request, type RequestHandler, type Response } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import type { Logger } from 'pino';
@@ -60,7 +60,7 @@ const slugOf = (req: Request) => parseOrThrow(slugParam, req.params.slug);
  * parsed (defaults filled), so equal questions about an immutable version share a tag.
  */
 function etagFor(contentHash: string, request: unknown): string {
-  return `"${createHash('sha256').update(contentHash).update(canonicalJson(request)).digest('base64url')}"`;
+  return `"${hash('sha256', contentHash + canonicalJson(request), 'base64url')}"`;
 }
 
 function notModified(req: Request, res: Response, tag: string): boolean {

@@ -1,4 +1,4 @@
-import { createHash, randomBytes, timingSafeEqual } from 'node:crypto';
+import { hash, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { ApiKeyKind } from '../../db/schema/api-access';
 
 /**
@@ -22,7 +22,7 @@ export function newKey(kind: ApiKeyKind): NewKey {
 }
 
 export function hashKey(key: string): string {
-  return createHash('sha256').update(key).digest('hex');
+  return hash('sha256', key, 'hex');
 }
 
 /** The prefix of a well-formed key, or null. */

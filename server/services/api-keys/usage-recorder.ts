@@ -40,8 +40,20 @@ export class UsageRecorder {
     this.defaultQuota = options.defaultMonthlyQuota === undefined ? 100_000 : options.defaultMonthlyQuota;
   }
 
+  /** The UTC day of the last call, so each call does not format a date. */
+  private today = { from: 0, to: 0, day: '' };
+
+  private dayOfCall(now: Date): string {
+    const t = now.getTime();
+    if (t < this.today.from || t >= this.today.to) {
+      const from = Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate());
+      this.today = { from, to: from + 86_400_000, day: dayOf(now) };
+    }
+    return this.today.day;
+  }
+
   record(apiKeyId: string, organisationId: string | null, endpoint: string, now = new Date()): void {
-    const day = dayOf(now);
+    const day = this.dayOfCall(now);
     const id = `${apiKeyId}|${endpoint}|${day}`;
     const entry = this.pending.get(id);
     if (entry) entry.count += 1;

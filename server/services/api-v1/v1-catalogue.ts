@@ -51,6 +51,10 @@ export class V1Catalogue {
 
   /** The newest published version that the selector (exact or a range) admits; default the latest. */
   async resolve(slug: string, selector?: string): Promise<ResolvedVersion> {
+    const rows = await this.publishedOf(slug);
+    // An exact published version (as the handlers pass after resolving once) needs no range parsing.
+    const exact = selector === undefined ? undefined : rows.find((r) => r.semver === selector);
+    if (exact) return this.load(exact);
     if (selector !== undefined && semver.validRange(selector) === null) {
       throw new HttpProblem({
         type: apiProblemTypes.invalidRange,
@@ -60,7 +64,6 @@ export class V1Catalogue {
         errors: [{ path: '/version', message: 'must be a version or a semver range' }],
       });
     }
-    const rows = await this.publishedOf(slug);
     if (rows.length === 0) throw notFound(engineProblemTypes.unknownTemplate, 'Unknown template', `There is no published template '${slug}'.`);
     const chosen = selector === undefined ? rows[0]!.semver : semver.maxSatisfying(rows.map((r) => r.semver), selector);
     const row = rows.find((r) => r.semver === chosen);
