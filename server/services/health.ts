@@ -3,7 +3,7 @@ import type { DatabaseHandle } from '../db/database';
 
 const PING_TIMEOUT_MS = 2000;
 
-export async function checkHealth(database: DatabaseHandle, version: string): Promise<Health> {
+export async function checkHealth(database: DatabaseHandle, version: string, mode: Health['mode']): Promise<Health> {
   let latencyMs: number | null = null;
   try {
     latencyMs = await withTimeout(database.ping(), PING_TIMEOUT_MS);
@@ -14,6 +14,7 @@ export async function checkHealth(database: DatabaseHandle, version: string): Pr
   return {
     status: ok ? 'ok' : 'degraded',
     version,
+    mode,
     database: { ok, driver: database.driver, latencyMs: ok ? Math.round(latencyMs! * 100) / 100 : null },
   };
 }

@@ -31,6 +31,7 @@ export const problemTypes = {
   unsupportedMediaType: '/problems/unsupported-media-type',
   notFound: '/problems/not-found',
   methodNotAllowed: '/problems/method-not-allowed',
+  notAcceptable: '/problems/not-acceptable',
   conflict: '/problems/conflict',
   unavailable: '/problems/unavailable',
   internal: '/problems/internal',

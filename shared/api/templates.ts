@@ -10,7 +10,11 @@ import { quantitySchema } from '../units/quantities';
  * are in the engine's units (mm, N, kg, N·mm, degrees); the client converts for display.
  */
 
-export const semverSchema = z.string().regex(/^\d+\.\d+\.\d+(-[0-9A-Za-z.-]+)?$/, 'must be a version like 1.0.0');
+export const semverSchema = z
+  .string()
+  .regex(/^\d+\.\d+\.\d+(-[0-9A-Za-z.-]+)?$/, 'must be a version like 1.0.0')
+  // An example, so generated documentation shows a version rather than a string made from the pattern.
+  .meta({ examples: ['1.0.0'] });
 
 export const templateSummarySchema = z.object({
   slug: z.string(),

@@ -28,6 +28,14 @@ describe('GET /api/health', () => {
     expect(health.database.ok).toBe(true);
     expect(health.database.driver).toBe(expectedDriver());
     expect(health.database.latencyMs).toBeGreaterThanOrEqual(0);
+    expect(health.mode).toBe('test');
+  });
+
+  it('names the mode the server runs in, which decides whether demo extras exist', async () => {
+    for (const mode of ['development', 'production'] as const) {
+      const res = await request(appFor(database, { accounts: { mode, secret: 'health-test-secret-0123456789abcdef' } })).get('/api/health');
+      expect(healthSchema.parse(res.body).mode).toBe(mode);
+    }
   });
 
   it('answers 503 degraded when the database does not answer', async () => {

@@ -131,6 +131,18 @@ describe('the built app served by the Pinwork server', () => {
     expect(problems.all()).toEqual([]);
   });
 
+  it('shows the API reference in production without asking for a demo key that only development has', async () => {
+    const asked: string[] = [];
+    page.on('request', (r) => {
+      if (r.url().includes('/api/dev/')) asked.push(r.url());
+    });
+    await page.goto(`${server.url}/developers/api`, { waitUntil: 'networkidle' });
+    await page.locator('.pinwork-openapi .opblock').first().waitFor();
+    expect(await page.locator('main').textContent()).not.toContain('pw_sk_');
+    expect(asked).toEqual([]);
+    expect(problems.all()).toEqual([]);
+  });
+
   it('shows the server’s problem details when the health check fails', async () => {
     await page.route('**/api/health', (route) =>
       route.fulfill({
@@ -159,6 +171,7 @@ describe('the built app served by the Pinwork server', () => {
         body: JSON.stringify({
           status: 'degraded',
           version: '9.9.9',
+          mode: 'production',
           database: { ok: false, driver: 'postgres', latencyMs: null },
         }),
       }),

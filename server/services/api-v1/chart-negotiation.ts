@@ -1,12 +1,11 @@
 import type { Request, Response } from 'express';
+import { problemTypes } from '../../../shared/api/problem';
 import type { UnitSystem } from '../../../shared/units/unit-systems';
 import { HttpProblem } from '../../middleware/http-problem';
 import { CHART_LAYOUT_REVISION } from './chart-renderer';
 import type { ChartIdentity } from './chart-svg';
 
 export const SVG_CONTENT_TYPE = 'image/svg+xml; charset=utf-8';
-/** Problem type of an Accept header that admits neither JSON nor an SVG chart. */
-export const notAcceptableType = '/problems/not-acceptable';
 
 export type ChartFormat = 'json' | 'svg';
 
@@ -20,7 +19,7 @@ export function chartFormat(req: Request, res: Response): ChartFormat {
   if (chosen === 'application/json') return 'json';
   if (chosen === 'image/svg+xml') return 'svg';
   throw new HttpProblem({
-    type: notAcceptableType,
+    type: problemTypes.notAcceptable,
     title: 'Not acceptable',
     status: 406,
     detail: `This endpoint answers application/json or image/svg+xml; the Accept header '${req.get('accept') ?? ''}' allows neither.`,

@@ -1,9 +1,8 @@
 import { z } from 'zod';
-import { problemSchema } from '../../../shared/api/problem';
+import { problemSchema, problemTypes } from '../../../shared/api/problem';
 import { engineProblemTypes } from '../../../shared/api/templates';
 import { apiProblemTypes, apiScopes, v1Limits } from '../../../shared/api/v1';
 import type { V1Operation } from '../../routes/v1-operations';
-import { notAcceptableType } from './chart-negotiation';
 
 type JsonObject = Record<string, unknown>;
 
@@ -88,7 +87,7 @@ export function openApiDocument(operations: readonly V1Operation[], version: str
     };
     (paths[op.path] ??= {})[op.method] = operation;
   }
-  const types = { ...engineProblemTypes, ...apiProblemTypes, notAcceptable: notAcceptableType };
+  const types = { ...engineProblemTypes, ...apiProblemTypes, notAcceptable: problemTypes.notAcceptable };
   return {
     openapi: '3.1.0',
     info: {

@@ -1,4 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import { healthQueryOptions } from '../../health/api/get-health';
 import { demoApiKeySchema, type DemoApiKey } from '../../../../shared/api/demo-key';
 import { ApiError, apiRequest } from '../../../lib/api-client';
 
@@ -12,15 +13,17 @@ export async function getDemoKey(signal?: AbortSignal): Promise<DemoApiKey | nul
   }
 }
 
-export function demoKeyQueryOptions() {
+export function demoKeyQueryOptions(queryClient: QueryClient) {
   return queryOptions({
     queryKey: ['dev', 'demo-key'],
-    queryFn: ({ signal }) => getDemoKey(signal),
+    // Only a development server has the key: ask it how it runs first, so a production page
+    // makes no request that must fail.
+    queryFn: async ({ signal }) => ((await queryClient.fetchQuery(healthQueryOptions())).mode === 'development' ? getDemoKey(signal) : null),
     staleTime: Infinity,
     retry: false,
   });
 }
 
 export function useDemoKey() {
-  return useQuery(demoKeyQueryOptions());
+  return useQuery(demoKeyQueryOptions(useQueryClient()));
 }
