@@ -8,11 +8,12 @@ import { securityHeaders } from './middleware/security-headers';
 import { serveClient } from './middleware/serve-client';
 import { healthRouter } from './routes/health';
 import { templateRoutes } from './routes/templates';
-import { v1Router, type V1Limits } from './routes/v1';
+import { defaultV1Limits, v1Router, type V1Limits } from './routes/v1';
 import { ApiKeyService } from './services/api-keys/api-keys';
 import { UsageRecorder } from './services/api-keys/usage-recorder';
 import { UsageReportService } from './services/api-keys/usage-report';
 import { V1Catalogue } from './services/api-v1/v1-catalogue';
+import { BatchedRateLimitStore } from './services/batched-rate-limit-store';
 import { createAccountSystem, type AccountSystemOptions } from './services/auth/account-system';
 import { TemplateCatalogue } from './services/templates/catalogue';
 import { TemplateStore } from './services/templates/template-store';
@@ -32,6 +33,15 @@ export interface AppOptions {
   accounts?: Partial<AccountSystemOptions>;
   /** The public API v1: limits, and how long key rows and quota figures are cached. */
   apiV1?: { limits?: Partial<V1Limits>; keyCacheMs?: number; flushMs?: number; defaultMonthlyQuota?: number | null };
+}
+
+/**
+ * Ends the app's batched work (the API usage counts and rate-limit hits held in memory) and
+ * writes what is pending; call it after the last request and before the database closes.
+ */
+export async function stopAppWork(app: express.Express): Promise<void> {
+  const locals = app.locals as { apiUsage?: UsageRecorder; apiRateLimits?: BatchedRateLimitStore };
+  await Promise.all([locals.apiUsage?.stop(), locals.apiRateLimits?.shutdown()]);
 }
 
 /** Builds the whole HTTP app without listening, so tests drive it through supertest. */
@@ -65,14 +75,25 @@ export function createApp(options: AppOptions): express.Express {
   app.use('/api/auth', accountSystem.authRouter);
   // Also before express.json: v1 checks the key first, then parses with its own, tighter limits.
   const templateStore = new TemplateStore(database.db);
+  const apiRateLimits = new BatchedRateLimitStore(database.db, 'api-v1:', { syncMs: v1.limits?.rateSyncMs ?? defaultV1Limits.rateSyncMs, logger });
+  app.locals.apiRateLimits = apiRateLimits;
   app.use(
     '/api/v1',
-    v1Router({ db: database.db, logger, keys: apiKeys, usage: apiUsage, catalogue: new V1Catalogue(templateStore), version: options.version ?? appVersion, limits: v1.limits }),
+    v1Router({
+      db: database.db,
+      logger,
+      keys: apiKeys,
+      usage: apiUsage,
+      catalogue: new V1Catalogue(templateStore),
+      version: options.version ?? appVersion,
+      limits: v1.limits,
+      rateLimitStore: apiRateLimits,
+    }),
   );
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
 
   const api = express.Router();
-  api.use(healthRouter(database, options.version ?? appVersion, options.accounts?.mode ?? 'test'));
+  api.use(healthRouter(database, options.version ?? appVersion));
   api.use(templateRoutes(new TemplateCatalogue(templateStore)));
   api.use(accountSystem.apiRouter);
   api.use(apiNotFound);

@@ -2,7 +2,7 @@ import { once } from 'node:events';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import type { Logger } from 'pino';
-import { createApp } from './app';
+import { createApp, stopAppWork } from './app';
 import type { ServerConfig } from './config';
 import { MEMORY_DATA_DIR, openDatabase } from './db/client';
 import { lockDataFolder, type DataFolderLock } from './db/data-folder-lock';
@@ -106,6 +106,8 @@ export async function startServer(
         }, DRAIN_TIMEOUT_MS);
         await closed;
         clearTimeout(timer);
+        // Calls counted since the last batch are written while the database is still open.
+        await stopAppWork(app).catch((error: unknown) => logger.error({ err: error }, 'could not write the last API usage counts'));
         await recordAudit(openDb.db, {
           actorKind: 'system',
           action: 'server.stop',

@@ -50,6 +50,8 @@ export interface V1Deps {
   catalogue: V1Catalogue;
   version: string;
   limits?: Partial<V1Limits>;
+  /** The per-key counters, when the caller stops them at shutdown (see stopAppWork). */
+  rateLimitStore?: BatchedRateLimitStore;
 }
 
 const slugParam = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'must be a template slug such as wall-jib-tie-rod').max(60);
@@ -83,7 +85,7 @@ export function v1Router(deps: V1Deps): express.Router {
   const specSchema = specJsonSchema();
 
   const limitOf = (req: Request) => apiKeyOf(req).ratePerMinute ?? limits.perWindow;
-  const limitStore = new BatchedRateLimitStore(deps.db, 'api-v1:', { syncMs: limits.rateSyncMs, logger: deps.logger });
+  const limitStore = deps.rateLimitStore ?? new BatchedRateLimitStore(deps.db, 'api-v1:', { syncMs: limits.rateSyncMs, logger: deps.logger });
   const limiter = rateLimit({
     windowMs: limits.windowMs,
     limit: limitOf,
