@@ -93,7 +93,7 @@ export function createApp(options: AppOptions): express.Express {
   app.use(express.json({ limit: options.jsonLimit ?? '100kb' }));
 
   const api = express.Router();
-  api.use(healthRouter(database, options.version ?? appVersion));
+  api.use(healthRouter(database, options.version ?? appVersion, options.accounts?.mode ?? 'test'));
   api.use(templateRoutes(new TemplateCatalogue(templateStore)));
   api.use(accountSystem.apiRouter);
   api.use(apiNotFound);
