@@ -19,6 +19,7 @@ import { members, organisations } from '../db/schema/organisations';
 import { HttpProblem } from '../middleware/http-problem';
 import type { SignedIn } from '../middleware/auth-guards';
 import { recordAudit } from './audit';
+import { readableAddress } from './auth/readable-address';
 import type { PinworkAuth } from './auth/auth-system';
 
 export interface Actor {
@@ -79,7 +80,7 @@ export class AccountService {
         id: row.id,
         createdAt: row.createdAt.toISOString(),
         expiresAt: row.expiresAt.toISOString(),
-        ipAddress: row.ipAddress,
+        ipAddress: readableAddress(row.ipAddress),
         userAgent: row.userAgent,
         current: row.id === signedIn.session.id,
       }));

@@ -98,7 +98,9 @@ export function createBetterAuth(db: Database, mail: MailQueue, logger: Logger, 
       cookiePrefix: 'pinwork',
       useSecureCookies: settings.mode === 'production',
       defaultCookieAttributes: { httpOnly: true, sameSite: 'lax', path: '/' },
-      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+      // Whole addresses: our own limiters group IPv6 clients by prefix; the session list and the
+      // audit log should name the address itself, not its /64.
+      ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER], ipv6Subnet: 128 },
     },
     plugins: [
       admin({
