@@ -2,6 +2,7 @@ import { and, eq, inArray } from 'drizzle-orm';
 import { inputJsonSchema } from '../../shared/spec/input-schema';
 import { templateSpecSchema, type TemplateSpecInput } from '../../shared/spec/template-spec';
 import { validateSpec } from '../../shared/spec/validate-spec';
+import { recordAudit } from '../services/audit';
 import { contentHash } from '../services/templates/content-hash';
 import { inputValidatorScript } from '../services/templates/input-validator';
 import { compareSemver } from '../services/templates/template-store';
@@ -24,7 +25,8 @@ const nextMinor = (v: string) => {
  * Seeds the built-in templates as published versions owned by the demo engineering
  * organisation. Idempotent: a spec whose content hash is already the latest version adds
  * nothing; a changed spec becomes a new version (published versions are frozen by a trigger,
- * so an overwrite could not happen even by mistake).
+ * so an overwrite could not happen even by mistake). Each version written is audited as
+ * template.published by the system.
  */
 export async function seedBuiltInTemplates(db: Database, specs: readonly TemplateSpecInput[], ownerSlug: string): Promise<TemplateSeedReport> {
   const report = { templates: 0, versions: 0 };
@@ -73,6 +75,13 @@ export async function seedBuiltInTemplates(db: Database, specs: readonly Templat
         changelog: latest ? `Built-in template updated (was ${latest}).` : 'First published version of the built-in template.',
         publishedAt: new Date(),
         validatorScript: inputValidatorScript(inputJsonSchema(spec), hash),
+      });
+      // Only a version written here is a publication: a restart that finds it stored records nothing.
+      await recordAudit(tx, {
+        actorKind: 'system',
+        action: 'template.published',
+        target: `template:${spec.slug}`,
+        details: { slug: spec.slug, version: semver, contentHash: hash, source: 'built-in' },
       });
       if (latest) {
         await tx.update(templates).set({ title: spec.title, summary: spec.summary, category: spec.category }).where(and(eq(templates.id, template!.id)));

@@ -2,7 +2,7 @@ import type { Request, RequestHandler } from 'express';
 import { rotateApiKeyRequestSchema, usageQuerySchema } from '../../shared/api/v1';
 import { signedIn } from '../middleware/auth-guards';
 import { parseOrThrow } from '../middleware/validate';
-import type { ApiKeyService, KeyScope } from '../services/api-keys/api-keys';
+import type { ApiKeyService, KeyActor, KeyScope } from '../services/api-keys/api-keys';
 import type { UsageReportService } from '../services/api-keys/usage-report';
 import type { ApiKeyRouteId } from './route-access';
 
@@ -14,6 +14,7 @@ export interface ApiKeyRouteServices {
 const orgScope = (req: Request): KeyScope => ({ organisationId: String(req.params.organisationId) });
 const everyKey: KeyScope = { all: true };
 const body = (req: Request) => req.body ?? {};
+const actorOf = (req: Request): KeyActor => ({ userId: signedIn(req).user.id, ip: req.ip ?? null });
 
 /** Key management for suppliers (their organisation's keys) and admins (every key, and their own). */
 export function apiKeyHandlers(s: ApiKeyRouteServices): Record<ApiKeyRouteId, RequestHandler> {
@@ -24,10 +25,10 @@ export function apiKeyHandlers(s: ApiKeyRouteServices): Record<ApiKeyRouteId, Re
   const rotate = (scope: (req: Request) => KeyScope): RequestHandler => async (req, res) => {
     const { graceSeconds } = parseOrThrow(rotateApiKeyRequestSchema, body(req));
     res.setHeader('Cache-Control', 'no-store');
-    res.status(201).json(await s.apiKeys.rotate(String(req.params.keyId), scope(req), graceSeconds, signedIn(req).user.id));
+    res.status(201).json(await s.apiKeys.rotate(String(req.params.keyId), scope(req), graceSeconds, actorOf(req)));
   };
   const revoke = (scope: (req: Request) => KeyScope): RequestHandler => async (req, res) => {
-    res.json(await s.apiKeys.revoke(String(req.params.keyId), scope(req), signedIn(req).user.id));
+    res.json(await s.apiKeys.revoke(String(req.params.keyId), scope(req), actorOf(req)));
   };
   const usage = (scope: (req: Request) => KeyScope): RequestHandler => async (req, res) => {
     const range = parseOrThrow(usageQuerySchema, req.query);
@@ -38,7 +39,7 @@ export function apiKeyHandlers(s: ApiKeyRouteServices): Record<ApiKeyRouteId, Re
     'apiKeys.list': list(orgScope),
     'apiKeys.create': async (req, res) => {
       res.setHeader('Cache-Control', 'no-store');
-      res.status(201).json(await s.apiKeys.create({ organisationId: String(req.params.organisationId), userId: signedIn(req).user.id }, body(req)));
+      res.status(201).json(await s.apiKeys.create({ organisationId: String(req.params.organisationId), ...actorOf(req) }, body(req)));
     },
     'apiKeys.rotate': rotate(orgScope),
     'apiKeys.revoke': revoke(orgScope),
@@ -51,7 +52,7 @@ export function apiKeyHandlers(s: ApiKeyRouteServices): Record<ApiKeyRouteId, Re
     },
     'apiKeys.admin.create': async (req, res) => {
       res.setHeader('Cache-Control', 'no-store');
-      res.status(201).json(await s.apiKeys.create({ organisationId: null, userId: signedIn(req).user.id }, body(req)));
+      res.status(201).json(await s.apiKeys.create({ organisationId: null, ...actorOf(req) }, body(req)));
     },
     'apiKeys.admin.rotate': rotate(() => everyKey),
     'apiKeys.admin.revoke': revoke(() => everyKey),

@@ -353,6 +353,7 @@ export const auditActions = [
   'organisation.invitation-revoked',
   'organisation.member-removed',
   'api-key.created',
+  'api-key.rotated',
   'api-key.revoked',
   'template.published',
   'server.start',

@@ -26,6 +26,12 @@ export type KeyCheck = { ok: true; key: VerifiedKey } | { ok: false; reason: 'in
 /** Who asks: an organisation's keys only, or (admin) every key. */
 export type KeyScope = { organisationId: string } | { all: true };
 
+/** Who changes a key, for the audit log: the signed-in person and the address they called from. */
+export interface KeyActor {
+  userId: string;
+  ip?: string | null;
+}
+
 export interface ApiKeyServiceOptions {
   /** How long a looked-up key row is trusted before it is read again (revocation elsewhere shows within this). */
   cacheMs?: number;
@@ -146,7 +152,7 @@ export class ApiKeyService {
   }
 
   /** A new key for an organisation (it must be a supplier) or, with organisationId null, an admin's own. */
-  async create(owner: { organisationId: string | null; userId: string }, body: unknown): Promise<CreatedApiKey> {
+  async create(owner: { organisationId: string | null } & KeyActor, body: unknown): Promise<CreatedApiKey> {
     const parsed = createApiKeyRequestSchema.safeParse(body);
     if (!parsed.success) throw new HttpProblem(validationProblem(parsed.error.issues));
     const req = parsed.data;
@@ -179,7 +185,14 @@ export class ApiKeyService {
       })
       .returning();
     this.origins.clear();
-    await recordAudit(this.db, { actorKind: 'user', actorId: owner.userId, action: 'api-key.create', target: row!.id, details: { prefix: row!.prefix, kind: row!.kind } });
+    await recordAudit(this.db, {
+      actorKind: 'user',
+      actorId: owner.userId,
+      action: 'api-key.created',
+      target: row!.id,
+      ip: owner.ip ?? null,
+      details: { prefix: row!.prefix, organisationId: row!.organisationId, kind: row!.kind, scopes: row!.scopes },
+    });
     return { key: made.key, info: keyInfo(row!) };
   }
 
@@ -194,7 +207,7 @@ export class ApiKeyService {
    * A new key with the same owner, kind, scopes and origins; the old one keeps working for
    * `graceSeconds` (or until its own earlier expiry) and then is refused as expired.
    */
-  async rotate(id: string, scope: KeyScope, graceSeconds: number, userId: string, now = new Date()): Promise<CreatedApiKey> {
+  async rotate(id: string, scope: KeyScope, graceSeconds: number, actor: KeyActor, now = new Date()): Promise<CreatedApiKey> {
     const old = await this.find(id, scope);
     if (old.revokedAt) {
       throw new HttpProblem({ type: '/problems/conflict', title: 'Key revoked', status: 409, detail: `Key ${old.prefix} is revoked; create a new key instead.` });
@@ -212,7 +225,7 @@ export class ApiKeyService {
           kind: old.kind,
           scopes: old.scopes,
           allowedOrigins: old.allowedOrigins,
-          createdBy: userId,
+          createdBy: actor.userId,
           expiresAt: old.expiresAt,
           ratePerMinute: old.ratePerMinute,
           rotatedFromId: old.id,
@@ -225,11 +238,18 @@ export class ApiKeyService {
       return created!;
     });
     this.forget(old);
-    await recordAudit(this.db, { actorKind: 'user', actorId: userId, action: 'api-key.rotate', target: old.id, details: { newKey: row.id, graceSeconds } });
+    await recordAudit(this.db, {
+      actorKind: 'user',
+      actorId: actor.userId,
+      action: 'api-key.rotated',
+      target: old.id,
+      ip: actor.ip ?? null,
+      details: { prefix: old.prefix, organisationId: old.organisationId, newKeyId: row.id, newPrefix: row.prefix, graceSeconds },
+    });
     return { key: made.key, info: keyInfo(row) };
   }
 
-  async revoke(id: string, scope: KeyScope, userId: string): Promise<ApiKeyInfo> {
+  async revoke(id: string, scope: KeyScope, actor: KeyActor): Promise<ApiKeyInfo> {
     const old = await this.find(id, scope);
     const [row] = await this.db
       .update(apiKeys)
@@ -237,7 +257,14 @@ export class ApiKeyService {
       .where(eq(apiKeys.id, old.id))
       .returning();
     this.forget(old);
-    await recordAudit(this.db, { actorKind: 'user', actorId: userId, action: 'api-key.revoke', target: old.id, details: { prefix: old.prefix } });
+    await recordAudit(this.db, {
+      actorKind: 'user',
+      actorId: actor.userId,
+      action: 'api-key.revoked',
+      target: old.id,
+      ip: actor.ip ?? null,
+      details: { prefix: old.prefix, organisationId: old.organisationId },
+    });
     return keyInfo(row!);
   }
 }
