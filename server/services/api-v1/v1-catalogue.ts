@@ -1,102 +1,41 @@
-import semver from 'semver';
-import { engineProblemTypes } from '../../../shared/api/templates';
-import { apiProblemTypes, type V1SolveResponse, type V1TemplateDetail, type V1TemplateList } from '../../../shared/api/v1';
-import type { CompiledTemplate } from '../../../shared/mechanics/compile-template';
-import { EngineError } from '../../../shared/mechanics/errors';
+import type { V1SolveResponse, V1TemplateDetail, V1TemplateList } from '../../../shared/api/v1';
 import { sweep, tornado } from '../../../shared/mechanics/sensitivity';
 import type { SweepOutput, SweepRequest, TornadoOutput, TornadoRequest } from '../../../shared/mechanics/sensitivity-schema';
-import { prepare, solve } from '../../../shared/mechanics/solve';
-import { inputJsonSchema } from '../../../shared/spec/input-schema';
-import type { TemplateSpec } from '../../../shared/spec/template-spec';
+import { solve } from '../../../shared/mechanics/solve';
 import { convertSolveResult } from '../../../shared/units/convert-result';
-import type { Quantity } from '../../../shared/units/quantities';
 import { fromDisplay, toDisplay, type UnitSystem } from '../../../shared/units/unit-systems';
 import { HttpProblem } from '../../middleware/http-problem';
-import { engineProblem } from '../templates/catalogue';
-import { compareSemver, latestPerSlug, versionInfo, type StoredVersion, type TemplateStore } from '../templates/template-store';
+import { detailFields, engineProblem, TemplateCatalogue, withEngineProblems, type LoadedVersion } from '../templates/catalogue';
+import type { TemplateStore } from '../templates/template-store';
 
-export interface ResolvedVersion {
-  row: StoredVersion;
-  compiled: CompiledTemplate;
-  quantities: Record<string, Quantity>;
-}
-
-const notFound = (type: string, title: string, detail: string) => new HttpProblem({ type, title, status: 404, detail });
+/** A published version as the public API resolves it (the catalogue's loaded version). */
+export type ResolvedVersion = LoadedVersion;
 
 /**
  * The catalogue as the public API sees it: versions chosen by semver range, inputs and
- * results in SI or US customary units. Version lists are read at most once a second per
- * template (a newly published version shows within that); compiled specs are kept by
- * content hash, since a published version never changes.
+ * results in SI or US customary units. Version choice, compilation, detail fields and engine
+ * errors are the first-party catalogue's (templates/catalogue.ts); version lists are reused
+ * for a second per template (a newly published version shows within that).
  */
 export class V1Catalogue {
-  private readonly compiled = new Map<string, ResolvedVersion>();
-  private readonly versions = new Map<string, { at: number; rows: Promise<StoredVersion[]> }>();
-  private published: { at: number; rows: Promise<StoredVersion[]> } | null = null;
+  private readonly base: TemplateCatalogue;
 
-  constructor(
-    private readonly store: TemplateStore,
-    private readonly cacheMs = 1000,
-  ) {}
-
-  private publishedOf(slug: string): Promise<StoredVersion[]> {
-    const hit = this.versions.get(slug);
-    if (hit && Date.now() - hit.at < this.cacheMs) return hit.rows;
-    const rows = this.store.versionsOf(slug).then((all) => all.filter((r) => r.status === 'published').sort((a, b) => compareSemver(b.semver, a.semver)));
-    this.versions.set(slug, { at: Date.now(), rows });
-    rows.catch(() => this.versions.delete(slug));
-    if (this.versions.size > 1000) this.versions.delete(this.versions.keys().next().value!);
-    return rows;
+  constructor(store: TemplateStore, cacheMs = 1000) {
+    this.base = new TemplateCatalogue(store, { versionCacheMs: cacheMs });
   }
 
   /** The newest published version that the selector (exact or a range) admits; default the latest. */
-  async resolve(slug: string, selector?: string): Promise<ResolvedVersion> {
-    const rows = await this.publishedOf(slug);
-    // An exact published version (as the handlers pass after resolving once) needs no range parsing.
-    const exact = selector === undefined ? undefined : rows.find((r) => r.semver === selector);
-    if (exact) return this.load(exact);
-    if (selector !== undefined && semver.validRange(selector) === null) {
-      throw new HttpProblem({
-        type: apiProblemTypes.invalidRange,
-        title: 'Invalid version',
-        status: 422,
-        detail: `'${selector}' is neither a version (1.0.0) nor a semver range (^1.0.0, ~1.2, >=1.1 <2).`,
-        errors: [{ path: '/version', message: 'must be a version or a semver range' }],
-      });
-    }
-    if (rows.length === 0) throw notFound(engineProblemTypes.unknownTemplate, 'Unknown template', `There is no published template '${slug}'.`);
-    const chosen = selector === undefined ? rows[0]!.semver : semver.maxSatisfying(rows.map((r) => r.semver), selector);
-    const row = rows.find((r) => r.semver === chosen);
-    if (!row) {
-      throw notFound(
-        engineProblemTypes.unknownVersion,
-        'Unknown version',
-        `Template '${slug}' has no published version matching ${selector}; published: ${rows.map((r) => r.semver).join(', ')}.`,
-      );
-    }
-    return this.load(row);
-  }
-
-  private load(row: StoredVersion): ResolvedVersion {
-    const hit = this.compiled.get(row.contentHash);
-    if (hit) return hit;
-    const compiled = prepare(row.spec as TemplateSpec);
-    const quantities = Object.fromEntries(compiled.inputs.map((i) => [i.key, i.quantity]));
-    const loaded = { row, compiled, quantities };
-    this.compiled.set(row.contentHash, loaded);
-    return loaded;
+  resolve(slug: string, selector?: string): Promise<ResolvedVersion> {
+    return this.base.resolve(slug, selector, { ranges: true });
   }
 
   async list(): Promise<V1TemplateList> {
-    if (!this.published || Date.now() - this.published.at >= this.cacheMs) {
-      this.published = { at: Date.now(), rows: this.store.publishedVersions() };
-    }
     return {
-      templates: latestPerSlug(await this.published.rows).map((row) => ({
+      templates: (await this.base.latestPublished()).map((row) => ({
         slug: row.slug,
         title: row.title,
         summary: row.summary,
-        category: this.load(row).compiled.spec.category,
+        category: this.base.load(row).spec.category,
         latestVersion: row.semver,
         contentHash: row.contentHash,
       })),
@@ -104,21 +43,14 @@ export class V1Catalogue {
   }
 
   async detail(slug: string, selector?: string): Promise<V1TemplateDetail> {
-    const { row, compiled } = await this.resolve(slug, selector);
-    const all = (await this.store.versionsOf(slug)).filter((r) => r.status !== 'draft').sort((a, b) => compareSemver(b.semver, a.semver));
-    const spec = compiled.spec;
+    const loaded = await this.resolve(slug, selector);
+    const d = detailFields(loaded, await this.base.versionsOf(slug));
     return {
-      slug: row.slug,
-      title: row.title,
-      summary: row.summary,
-      category: spec.category,
-      version: row.semver,
-      contentHash: row.contentHash,
-      versions: all.map(versionInfo),
-      inputSchema: inputJsonSchema(spec),
-      defaults: Object.fromEntries(compiled.inputs.map((i) => [i.key, i.default])),
-      inputs: compiled.inputs.map((i) => ({ key: i.key, label: i.label, quantity: i.quantity })),
-      results: compiled.results.map((r) => ({ key: r.key, label: r.label, quantity: r.quantity ?? 'ratio' })),
+      ...d.head,
+      inputSchema: d.inputSchema,
+      defaults: d.defaults,
+      inputs: loaded.compiled.inputs.map((i) => ({ key: i.key, label: i.label, quantity: i.quantity })),
+      results: d.results,
     };
   }
 
@@ -134,25 +66,13 @@ export class V1Catalogue {
     const q = v.quantities[request.input];
     const si = (x: number | undefined) => (x === undefined || !q ? x : fromDisplay(x, q, units));
     const siRequest = { ...request, from: si(request.from), to: si(request.to) };
-    let out: SweepOutput;
-    try {
-      out = sweep(v.compiled, toSi(v, inputs, units), siRequest);
-    } catch (err) {
-      if (err instanceof EngineError) throw new HttpProblem(engineProblem(err.info, ['sweep']));
-      throw err;
-    }
+    const out = withEngineProblems('sweep', () => sweep(v.compiled, toSi(v, inputs, units), siRequest));
     return { ...identity(v, units), sweep: units === 'SI' ? out : sweepInUnits(out, units) };
   }
 
   async sensitivity(slug: string, selector: string | undefined, inputs: Record<string, number>, request: TornadoRequest, units: UnitSystem) {
     const v = await this.resolve(slug, selector);
-    let out: TornadoOutput;
-    try {
-      out = tornado(v.compiled, toSi(v, inputs, units), request);
-    } catch (err) {
-      if (err instanceof EngineError) throw new HttpProblem(engineProblem(err.info, ['tornado']));
-      throw err;
-    }
+    const out = withEngineProblems('tornado', () => tornado(v.compiled, toSi(v, inputs, units), request));
     return { ...identity(v, units), tornado: units === 'SI' ? out : tornadoInUnits(out, units) };
   }
 }

@@ -1,3 +1,4 @@
+import semver from 'semver';
 import type { Problem } from '../../../shared/api/problem';
 import { toJsonPointer } from '../../../shared/api/problem';
 import {
@@ -8,6 +9,7 @@ import {
   type TemplateDetail,
   type TemplateList,
 } from '../../../shared/api/templates';
+import { apiProblemTypes } from '../../../shared/api/v1';
 import { thumbnailSvg } from '../../../shared/drawing/thumbnail';
 import type { CompiledTemplate } from '../../../shared/mechanics/compile-template';
 import { EngineError, type EngineErrorInfo } from '../../../shared/mechanics/errors';
@@ -16,14 +18,25 @@ import type { SweepRequest, TornadoRequest } from '../../../shared/mechanics/sen
 import { prepare, solve } from '../../../shared/mechanics/solve';
 import { inputJsonSchema } from '../../../shared/spec/input-schema';
 import type { TemplateSpec } from '../../../shared/spec/template-spec';
+import type { Quantity } from '../../../shared/units/quantities';
 import { HttpProblem } from '../../middleware/http-problem';
 import { compareSemver, latestPerSlug, versionInfo, type StoredVersion, type TemplateStore } from './template-store';
 
 /** A published version ready to serve: its spec compiled once (versions are immutable). */
-interface Loaded {
+export interface LoadedVersion {
   row: StoredVersion;
   compiled: CompiledTemplate;
   spec: TemplateSpec;
+  /** Each input's quantity, for unit conversion. */
+  quantities: Record<string, Quantity>;
+}
+
+export interface CatalogueOptions {
+  /**
+   * How long a template's version list (and the list of latest versions) is reused: 0 reads
+   * it for every request; the public API keeps it a second, so a new version shows within one.
+   */
+  versionCacheMs?: number;
 }
 
 const ENGINE_TITLES: Record<EngineErrorInfo['kind'], string> = {
@@ -57,37 +70,106 @@ export function engineProblem(info: EngineErrorInfo, prefix: string[] = []): Pro
 
 const notFound = (type: string, title: string, detail: string): HttpProblem => new HttpProblem({ type, title, status: 404, detail });
 
+/** Runs an engine analysis; an engine error about the request becomes a 422 problem under `prefix`. */
+export function withEngineProblems<T>(prefix: string, run: () => T): T {
+  try {
+    return run();
+  } catch (err) {
+    if (err instanceof EngineError) throw new HttpProblem(engineProblem(err.info, [prefix]));
+    throw err;
+  }
+}
+
+/** The fields a template's detail has in both APIs, from the version chosen and its siblings. */
+export function detailFields(loaded: LoadedVersion, versions: StoredVersion[]) {
+  const { row, spec, compiled } = loaded;
+  return {
+    head: { slug: row.slug, title: row.title, summary: row.summary, category: spec.category, version: row.semver, contentHash: row.contentHash, versions: versions.map(versionInfo) },
+    inputSchema: inputJsonSchema(spec),
+    defaults: Object.fromEntries(compiled.inputs.map((i) => [i.key, i.default])),
+    results: compiled.results.map((r) => ({ key: r.key, label: r.label, quantity: r.quantity ?? 'ratio' })),
+  };
+}
+
 /**
  * The published templates as the calculator and the API see them. Compiled specs and
  * thumbnails are cached by content hash: a published version never changes, so neither can
- * anything derived from it.
+ * anything derived from it. Version choice, detail fields and engine errors live here once;
+ * the public API's catalogue (api-v1/v1-catalogue.ts) adds semver ranges and units on top.
  */
 export class TemplateCatalogue {
-  private readonly byHash = new Map<string, Loaded>();
+  private readonly byHash = new Map<string, LoadedVersion>();
   private readonly thumbnails = new Map<string, string>();
+  private readonly versionCacheMs: number;
+  private readonly versions = new Map<string, { at: number; rows: Promise<StoredVersion[]> }>();
+  private latest: { at: number; rows: Promise<StoredVersion[]> } | null = null;
 
-  constructor(private readonly store: TemplateStore) {}
+  constructor(
+    private readonly store: TemplateStore,
+    options: CatalogueOptions = {},
+  ) {
+    this.versionCacheMs = options.versionCacheMs ?? 0;
+  }
 
-  private load(row: StoredVersion): Loaded {
+  load(row: StoredVersion): LoadedVersion {
     const hit = this.byHash.get(row.contentHash);
     if (hit) return hit;
     const compiled = prepare(row.spec as TemplateSpec);
-    const loaded = { row, compiled, spec: compiled.spec };
+    const quantities = Object.fromEntries(compiled.inputs.map((i) => [i.key, i.quantity]));
+    const loaded = { row, compiled, spec: compiled.spec, quantities };
     this.byHash.set(row.contentHash, loaded);
     return loaded;
   }
 
-  /** The version asked for (exact), or the latest published one. */
-  async resolve(slug: string, version?: string): Promise<Loaded> {
-    const rows = (await this.store.versionsOf(slug)).filter((r) => r.status === 'published');
+  /** Every version of a template but drafts, newest first (cached as the options say). */
+  versionsOf(slug: string): Promise<StoredVersion[]> {
+    const hit = this.versions.get(slug);
+    if (hit && Date.now() - hit.at < this.versionCacheMs) return hit.rows;
+    const rows = this.store.versionsOf(slug).then((all) => all.filter((r) => r.status !== 'draft').sort((a, b) => compareSemver(b.semver, a.semver)));
+    if (this.versionCacheMs > 0) {
+      this.versions.set(slug, { at: Date.now(), rows });
+      rows.catch(() => this.versions.delete(slug));
+      if (this.versions.size > 1000) this.versions.delete(this.versions.keys().next().value!);
+    }
+    return rows;
+  }
+
+  /** The latest published version of every template. */
+  async latestPublished(): Promise<StoredVersion[]> {
+    if (this.latest && Date.now() - this.latest.at < this.versionCacheMs) return this.latest.rows;
+    const rows = this.store.publishedVersions().then(latestPerSlug);
+    if (this.versionCacheMs > 0) {
+      this.latest = { at: Date.now(), rows };
+      rows.catch(() => (this.latest = null));
+    }
+    return rows;
+  }
+
+  /**
+   * The published version asked for: exact, or with `ranges` the newest a semver range admits;
+   * the latest when none is named. An exact match needs no range parsing.
+   */
+  async resolve(slug: string, selector?: string, options: { ranges?: boolean } = {}): Promise<LoadedVersion> {
+    const rows = (await this.versionsOf(slug)).filter((r) => r.status === 'published');
+    const exact = selector === undefined ? rows[0] : rows.find((r) => r.semver === selector);
+    if (exact) return this.load(exact);
+    if (options.ranges && selector !== undefined && semver.validRange(selector) === null) {
+      throw new HttpProblem({
+        type: apiProblemTypes.invalidRange,
+        title: 'Invalid version',
+        status: 422,
+        detail: `'${selector}' is neither a version (1.0.0) nor a semver range (^1.0.0, ~1.2, >=1.1 <2).`,
+        errors: [{ path: '/version', message: 'must be a version or a semver range' }],
+      });
+    }
     if (rows.length === 0) throw notFound(engineProblemTypes.unknownTemplate, 'Unknown template', `There is no published template '${slug}'.`);
-    rows.sort((a, b) => compareSemver(b.semver, a.semver));
-    const row = version === undefined ? rows[0]! : rows.find((r) => r.semver === version);
+    const chosen = options.ranges ? semver.maxSatisfying(rows.map((r) => r.semver), selector!) : null;
+    const row = rows.find((r) => r.semver === chosen);
     if (!row) {
       throw notFound(
         engineProblemTypes.unknownVersion,
         'Unknown version',
-        `Template '${slug}' has no published version ${version}; published: ${rows.map((r) => r.semver).join(', ')}.`,
+        `Template '${slug}' has no published version ${options.ranges ? 'matching ' : ''}${selector}; published: ${rows.map((r) => r.semver).join(', ')}.`,
       );
     }
     return this.load(row);
@@ -95,7 +177,7 @@ export class TemplateCatalogue {
 
   async list(): Promise<TemplateList> {
     return {
-      templates: latestPerSlug(await this.store.publishedVersions()).map((row) => {
+      templates: (await this.latestPublished()).map((row) => {
         const { spec } = this.load(row);
         return {
           slug: row.slug,
@@ -122,21 +204,15 @@ export class TemplateCatalogue {
   }
 
   async detail(slug: string, version?: string): Promise<TemplateDetail> {
-    const { row, spec, compiled } = await this.resolve(slug, version);
-    const all = (await this.store.versionsOf(slug)).filter((r) => r.status !== 'draft').sort((a, b) => compareSemver(b.semver, a.semver));
+    const loaded = await this.resolve(slug, version);
+    const d = detailFields(loaded, await this.versionsOf(slug));
     return {
-      slug: row.slug,
-      title: row.title,
-      summary: row.summary,
-      category: spec.category,
-      version: row.semver,
-      contentHash: row.contentHash,
-      versions: all.map(versionInfo),
-      spec,
-      inputSchema: inputJsonSchema(spec),
-      defaults: Object.fromEntries(compiled.inputs.map((i) => [i.key, i.default])),
-      results: compiled.results.map((r) => ({ key: r.key, label: r.label, quantity: r.quantity ?? 'ratio' })),
-      validatorUrl: `/api/templates/${encodeURIComponent(row.slug)}/versions/${row.semver}/validator.js`,
+      ...d.head,
+      spec: loaded.spec,
+      inputSchema: d.inputSchema,
+      defaults: d.defaults,
+      results: d.results,
+      validatorUrl: `/api/templates/${encodeURIComponent(loaded.row.slug)}/versions/${loaded.row.semver}/validator.js`,
     };
   }
 
@@ -149,22 +225,12 @@ export class TemplateCatalogue {
 
   async sweep(slug: string, version: string | undefined, inputs: Record<string, number>, request: SweepRequest): Promise<SweepResponse> {
     const { row, compiled } = await this.resolve(slug, version);
-    try {
-      return { slug: row.slug, version: row.semver, contentHash: row.contentHash, sweep: sweep(compiled, inputs, request) };
-    } catch (err) {
-      if (err instanceof EngineError) throw new HttpProblem(engineProblem(err.info, ['sweep']));
-      throw err;
-    }
+    return { slug: row.slug, version: row.semver, contentHash: row.contentHash, sweep: withEngineProblems('sweep', () => sweep(compiled, inputs, request)) };
   }
 
   async sensitivity(slug: string, version: string | undefined, inputs: Record<string, number>, request: TornadoRequest): Promise<SensitivityResponse> {
     const { row, compiled } = await this.resolve(slug, version);
-    try {
-      return { slug: row.slug, version: row.semver, contentHash: row.contentHash, tornado: tornado(compiled, inputs, request) };
-    } catch (err) {
-      if (err instanceof EngineError) throw new HttpProblem(engineProblem(err.info, ['tornado']));
-      throw err;
-    }
+    return { slug: row.slug, version: row.semver, contentHash: row.contentHash, tornado: withEngineProblems('tornado', () => tornado(compiled, inputs, request)) };
   }
 
   async validatorScript(slug: string, version: string): Promise<string> {
