@@ -12,10 +12,16 @@ export function ok(r: SolveOutcome): SolveResult {
   return r;
 }
 
-export const result = (r: SolveResult, key: string): number => {
-  const v = r.results.find((x) => x.key === key);
+/** A result's value; takes a solve outcome too (and fails on an error) so a test can pass solve(...) straight in. */
+export const result = (r: SolveOutcome, key: string): number => {
+  const v = ok(r).results.find((x) => x.key === key);
   if (!v || v.value === null) throw new Error(`no value for result ${key}`);
   return v.value;
+};
+export const verdict = (r: SolveOutcome, key: string) => {
+  const c = ok(r).checks.find((x) => x.key === key);
+  if (!c) throw new Error(`no check ${key}`);
+  return c.verdict;
 };
 export const joint = (r: SolveResult, id: string) => {
   const j = r.joints.find((x) => x.id === id);

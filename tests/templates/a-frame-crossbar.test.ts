@@ -2,15 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import type { TemplateSpecInput } from '../../shared/spec/template-spec';
 import { aFrameCrossbar } from '../../templates/a-frame-crossbar/spec';
+import { D, ok, result, verdict } from '../engine/helpers';
 
 const g = 9.80665;
-const D = Math.PI / 180;
-const solved = (r: ReturnType<typeof solve>) => {
-  if (!r.ok) throw new Error(`${r.error.kind}: ${r.error.message}`);
-  return r;
-};
-const v = (r: ReturnType<typeof solve>, key: string) => solved(r).results.find((x) => x.key === key)!.value!;
-const verdict = (r: ReturnType<typeof solve>, key: string) => solved(r).checks.find((c) => c.key === key)!.verdict;
 
 /** The same frame without the crossbar, both feet on the floor with the friction they need. */
 const withoutBar: TemplateSpecInput = {
@@ -52,34 +46,34 @@ describe('A-frame with a crossbar: independent hand check', () => {
     const Wl = 10 * g;
     const NC = (P * 1200) / 4000 + Wl;
     const T = ((P * 1200 + Wl * 2000) * Math.tan(30 * D)) / 1600;
-    expect(v(r, 'NC')).toBeCloseTo(NC, 6);
-    expect(v(r, 'NC')).toBeCloseTo(686.47, 1);
-    expect(v(r, 'NB')).toBeCloseTo(P + 2 * Wl - NC, 6);
-    expect(v(r, 'NB')).toBeCloseTo(1471.0, 1);
-    expect(v(r, 'T')).toBeCloseTo(T, 6);
-    expect(v(r, 'T')).toBeCloseTo(920.05, 1);
-    expect(v(r, 'Rapex')).toBeCloseTo(Math.hypot(T, NC - Wl), 6);
-    expect(v(r, 'Rapex')).toBeCloseTo(1092.11, 1);
-    expect(Math.abs(v(r, 'HB'))).toBeLessThan(1e-9 * P);
-    expect(v(r, 'Tdesign')).toBeCloseTo(3 * T, 6);
-    expect(v(r, 'spread')).toBeCloseTo(2000, 6);
+    expect(result(r, 'NC')).toBeCloseTo(NC, 6);
+    expect(result(r, 'NC')).toBeCloseTo(686.47, 1);
+    expect(result(r, 'NB')).toBeCloseTo(P + 2 * Wl - NC, 6);
+    expect(result(r, 'NB')).toBeCloseTo(1471.0, 1);
+    expect(result(r, 'T')).toBeCloseTo(T, 6);
+    expect(result(r, 'T')).toBeCloseTo(920.05, 1);
+    expect(result(r, 'Rapex')).toBeCloseTo(Math.hypot(T, NC - Wl), 6);
+    expect(result(r, 'Rapex')).toBeCloseTo(1092.11, 1);
+    expect(Math.abs(result(r, 'HB'))).toBeLessThan(1e-9 * P);
+    expect(result(r, 'Tdesign')).toBeCloseTo(3 * T, 6);
+    expect(result(r, 'spread')).toBeCloseTo(2000, 6);
   });
 
   it('friction needed without the crossbar, against the engine solving the frame without it', () => {
     const r = solve(aFrameCrossbar, inputs);
     const free = solve(withoutBar, inputs);
-    expect(v(r, 'Hfree')).toBeCloseTo(368.02, 1);
-    expect(v(r, 'muNoBar')).toBeCloseTo(0.5361, 4);
+    expect(result(r, 'Hfree')).toBeCloseTo(368.02, 1);
+    expect(result(r, 'muNoBar')).toBeCloseTo(0.5361, 4);
     // The three-hinged frame solved by the engine gives the same thrust and the same critical foot.
-    expect(v(free, 'HC')).toBeCloseTo(v(r, 'Hfree'), 6);
-    expect(v(free, 'muC')).toBeCloseTo(v(r, 'muNoBar'), 9);
-    expect(v(free, 'muB')).toBeCloseTo(0.2502, 4);
-    expect(v(free, 'muB')).toBeLessThan(v(free, 'muC'));
+    expect(result(free, 'HC')).toBeCloseTo(result(r, 'Hfree'), 6);
+    expect(result(free, 'muC')).toBeCloseTo(result(r, 'muNoBar'), 9);
+    expect(result(free, 'muB')).toBeCloseTo(0.2502, 4);
+    expect(result(free, 'muB')).toBeLessThan(result(free, 'muC'));
     // Weightless legs: tan α at the critical foot wherever the load sits above the foot.
     for (const loadAt of [10, 50, 100]) {
       const w = solve(aFrameCrossbar, { ...inputs, mLeg: 0, loadAt });
-      expect(v(w, 'muNoBar')).toBeCloseTo(Math.tan(30 * D), 9);
-      expect(v(solve(withoutBar, { ...inputs, mLeg: 0, loadAt }), 'muC')).toBeCloseTo(Math.tan(30 * D), 9);
+      expect(result(w, 'muNoBar')).toBeCloseTo(Math.tan(30 * D), 9);
+      expect(result(solve(withoutBar, { ...inputs, mLeg: 0, loadAt }), 'muC')).toBeCloseTo(Math.tan(30 * D), 9);
     }
   });
 
@@ -87,7 +81,7 @@ describe('A-frame with a crossbar: independent hand check', () => {
     for (const loadAt of [0, 25, 75, 100]) {
       const r = solve(aFrameCrossbar, { ...inputs, mLeg: 0, loadAt });
       const d = (2000 * loadAt) / 100;
-      expect(v(r, 'T')).toBeCloseTo((200 * g * d * Math.tan(30 * D)) / 1600, 6);
+      expect(result(r, 'T')).toBeCloseTo((200 * g * d * Math.tan(30 * D)) / 1600, 6);
     }
   });
 
@@ -96,8 +90,8 @@ describe('A-frame with a crossbar: independent hand check', () => {
     const base = { ...inputs, mLeg: 0, alpha: 20 };
     expect(verdict(solve(aFrameCrossbar, { ...base, muFloor: 0.8 }), 'noBar')).toBe('pass');
     expect(verdict(solve(aFrameCrossbar, { ...base, muFloor: 0.5 }), 'noBar')).toBe('warn');
-    const sliding = solved(solve(aFrameCrossbar, { ...base, muFloor: 0.3 }));
+    const sliding = ok(solve(aFrameCrossbar, { ...base, muFloor: 0.3 }));
     expect(sliding.checks.find((c) => c.key === 'noBar')!.verdict).toBe('warn');
-    expect(v(sliding, 'muNoBar')).toBeGreaterThan(0.3);
+    expect(result(sliding, 'muNoBar')).toBeGreaterThan(0.3);
   });
 });

@@ -1,14 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import { compoundLeverCutter } from '../../templates/compound-lever-cutter/spec';
+import { D, ok, result } from '../engine/helpers';
 
-const D = Math.PI / 180;
-type Solved = Extract<ReturnType<typeof solve>, { ok: true }>;
-const ok = (r: ReturnType<typeof solve>): Solved => {
-  if (!r.ok) throw new Error(`${r.error.kind}: ${r.error.message}`);
-  return r;
-};
-const v = (r: Solved, key: string) => r.results.find((x) => x.key === key)!.value!;
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 const defaults = { P: 200, gap: 8, a: 400, b: 50, c: 60, d: 15, Lk: 16, hH: 8 };
@@ -60,11 +54,11 @@ describe('compound-lever cutter: independent hand check', () => {
     // Handle pivot: hand force 200 N down (at right angles to the handle) and link push 1600 N
     // up at C: RH = 1800 N. Jaw pivot: link 1600 N down at E, bolt 6400 N up: RJ = 8000 N.
     const r = ok(solve(compoundLeverCutter, { gap: 0 }));
-    expect(rel(v(r, 'S'), 1600)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Q'), 6400)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'RH'), 1800)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'RJ'), 8000)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Qlower'), 6400)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'S'), 1600)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Q'), 6400)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'RH'), 1800)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'RJ'), 8000)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Qlower'), 6400)).toBeLessThan(1e-9);
   });
 
   it('jaws open 10 mm: moment arms of the open position', () => {
@@ -77,15 +71,15 @@ describe('compound-lever cutter: independent hand check', () => {
     expect(cf.phi).toBeCloseTo(15.825, 3);
     expect(cf.armK).toBeCloseTo(20.976, 3);
     const r = ok(solve(compoundLeverCutter, { gap: 10 }));
-    for (const k of ['S', 'Q', 'MA', 'RH', 'RJ'] as const) expect(rel(v(r, k), cf[k]), k).toBeLessThan(1e-9);
-    expect(v(r, 'Q')).toBeLessThan(6400);
+    for (const k of ['S', 'Q', 'MA', 'RH', 'RJ'] as const) expect(rel(result(r, k), cf[k]), k).toBeLessThan(1e-9);
+    expect(result(r, 'Q')).toBeLessThan(6400);
   });
 
   it.each([0, 4, 8, 12, 16])('both halves solved independently agree, and virtual work, at gap %d mm', (gap) => {
     const r = ok(solve(compoundLeverCutter, { gap }));
     const cf = cutterClosedForm({ ...defaults, gap });
-    expect(rel(v(r, 'Q'), cf.Q)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Qlower'), v(r, 'Q'))).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Q'), cf.Q)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Qlower'), result(r, 'Q'))).toBeLessThan(1e-9);
     const j = (id: string) => r.joints.find((x) => x.id === id)!;
     // Mirror images: the lower pins carry the mirrored forces.
     expect(j('H2').fx).toBeCloseTo(j('H1').fx, 6);
@@ -111,9 +105,9 @@ describe('compound-lever cutter: checks', () => {
     // A long jaw tail opened wide: the handle turns so far that crank and link close to 40°, and
     // the link line has swung past the jaw pivot, so the link would turn the jaw open.
     const r = ok(solve(compoundLeverCutter, { gap: 16, c: 100 }));
-    expect(v(r, 'crankLinkAngle')).toBeLessThan(45);
+    expect(result(r, 'crankLinkAngle')).toBeLessThan(45);
     expect(r.checks.find((c) => c.key === 'crankLink')!.verdict).toBe('warn');
-    expect(v(r, 'Q')).toBeLessThan(0);
+    expect(result(r, 'Q')).toBeLessThan(0);
     expect(r.checks.find((c) => c.key === 'linkPush')!.verdict).toBe('fail');
   });
 });

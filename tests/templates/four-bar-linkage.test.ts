@@ -1,14 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import { fourBarLinkage } from '../../templates/four-bar-linkage/spec';
+import { D, ok, result } from '../engine/helpers';
 
-const D = Math.PI / 180;
-type Solved = Extract<ReturnType<typeof solve>, { ok: true }>;
-const ok = (r: ReturnType<typeof solve>): Solved => {
-  if (!r.ok) throw new Error(`${r.error.kind}: ${r.error.message}`);
-  return r;
-};
-const v = (r: Solved, key: string) => r.results.find((x) => x.key === key)!.value!;
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 const defaults = { T2: 10000, theta2: 60, d: 300, a: 100, b: 250, c: 200, rOut: 200, branch: 1 };
@@ -55,12 +49,12 @@ describe('four-bar linkage: independent hand check', () => {
     expect(cf.mu).toBeCloseTo(71.03, 2);
     expect(cf.ratio).toBeCloseTo(3.429, 3);
     const r = ok(solve(fourBarLinkage));
-    expect(rel(v(r, 'theta4'), cf.theta4)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'mu'), cf.mu)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'T4'), cf.T4)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Fout'), cf.Fout)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Fc'), cf.Fc)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'R2'), Math.abs(cf.Fc))).toBeLessThan(1e-9);
+    expect(rel(result(r, 'theta4'), cf.theta4)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'mu'), cf.mu)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'T4'), cf.T4)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Fout'), cf.Fout)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Fc'), cf.Fc)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'R2'), Math.abs(cf.Fc))).toBeLessThan(1e-9);
     expect(r.verification.virtualWork!.relativeDifference).toBeLessThan(1e-6);
   });
 
@@ -70,10 +64,10 @@ describe('four-bar linkage: independent hand check', () => {
   ])('follows Norton’s closed form at θ2 = %d° on branch %d', (theta2, branch) => {
     const cf = fourBarClosedForm({ ...defaults, theta2, branch });
     const r = ok(solve(fourBarLinkage, { theta2, branch }));
-    expect(rel(v(r, 'theta4'), cf.theta4)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'T4'), cf.T4)).toBeLessThan(1e-8);
-    expect(rel(v(r, 'mu'), cf.mu)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Fc'), cf.Fc)).toBeLessThan(1e-8);
+    expect(rel(result(r, 'theta4'), cf.theta4)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'T4'), cf.T4)).toBeLessThan(1e-8);
+    expect(rel(result(r, 'mu'), cf.mu)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Fc'), cf.Fc)).toBeLessThan(1e-8);
   });
 
   it('the reference cases in the spec match the closed form', () => {
@@ -106,7 +100,7 @@ describe('four-bar linkage: across the crank angle', () => {
     expect(r.error.message).toMatch(/grow without bound/);
     // Two degrees away it solves, warns through the check and the ratio is large.
     const near = ok(solve(fourBarLinkage, { theta2: limit - 2 }));
-    expect(v(near, 'ratio')).toBeGreaterThan(20);
+    expect(result(near, 'ratio')).toBeGreaterThan(20);
     expect(near.checks.find((c) => c.key === 'limitPosition')!.verdict).toBe('warn');
   });
 });
@@ -117,11 +111,11 @@ describe('four-bar linkage: checks', () => {
     expect(d.checks.every((c) => c.verdict === 'pass')).toBe(true);
     // A long coupler and short rocker: cos μ at θ2 = 0 is (300² + 160² − 100² − 300² + 2·100·300)/(2·300·160) = 75 600/96 000 = 0.7875 → μ = 38.05°.
     const poor = ok(solve(fourBarLinkage, { b: 300, c: 160, theta2: 0 }));
-    expect(v(poor, 'mu')).toBeCloseTo(Math.acos(0.7875) / D, 6);
+    expect(result(poor, 'mu')).toBeCloseTo(Math.acos(0.7875) / D, 6);
     expect(poor.checks.find((c) => c.key === 'transmission')!.verdict).toBe('warn');
     const bad = ok(solve(fourBarLinkage, { b: 300, c: 160, d: 290, a: 140, theta2: 0 }));
     // cos μ = (300² + 160² − 150²)/(2·300·160) = 93 100/96 000 = 0.96979 → μ = 14.1°.
-    expect(v(bad, 'mu')).toBeCloseTo(Math.acos(93100 / 96000) / D, 6);
+    expect(result(bad, 'mu')).toBeCloseTo(Math.acos(93100 / 96000) / D, 6);
     expect(bad.checks.find((c) => c.key === 'transmission')!.verdict).toBe('fail');
   });
 

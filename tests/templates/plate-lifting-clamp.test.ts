@@ -1,14 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import { plateLiftingClamp } from '../../templates/plate-lifting-clamp/spec';
+import { result, verdict } from '../engine/helpers';
 
 const g = 9.80665;
-const ok = (r: ReturnType<typeof solve>) => {
-  if (!r.ok) throw new Error(r.error.message);
-  return r;
-};
-const v = (r: ReturnType<typeof solve>, key: string) => ok(r).results.find((x) => x.key === key)!.value!;
-const verdict = (r: ReturnType<typeof solve>, key: string) => ok(r).checks.find((c) => c.key === key)!.verdict;
 
 describe('plate lifting clamp with a lever jaw: independent hand check', () => {
   it('pad 2 mm above the jaw on a 12 mm plate', () => {
@@ -23,16 +18,16 @@ describe('plate lifting clamp with a lever jaw: independent hand check', () => {
     //   Pivot force on the body = (N, F_pad): |R| = W √(222² + 36²)/146 = 1.54041 W.
     const r = solve(plateLiftingClamp, { m: 1500, t: 12, e: 25, d: 8, p: 2 });
     const W = 1500 * g;
-    expect(v(r, 'N')).toBeCloseTo((222 / 146) * W, 6);
-    expect(v(r, 'N')).toBeCloseTo(22367, -1);
-    expect(v(r, 'Fpad')).toBeCloseTo((36 / 146) * W, 6);
-    expect(v(r, 'Fjaw')).toBeCloseTo((110 / 146) * W, 6);
-    expect(v(r, 'muPad')).toBeCloseTo(6 / 37, 9);
-    expect(v(r, 'muJaw')).toBeCloseTo(0.4955, 4);
-    expect(v(r, 'muReq')).toBeCloseTo(110 / 222, 9);
-    expect(v(r, 'Rpin')).toBeCloseTo((W * Math.hypot(222, 36)) / 146, 6);
-    expect(v(r, 'Tlink')).toBeCloseTo(W, 9);
-    expect(v(r, 'Ndesign')).toBeCloseTo(3 * v(r, 'N'), 6);
+    expect(result(r, 'N')).toBeCloseTo((222 / 146) * W, 6);
+    expect(result(r, 'N')).toBeCloseTo(22367, -1);
+    expect(result(r, 'Fpad')).toBeCloseTo((36 / 146) * W, 6);
+    expect(result(r, 'Fjaw')).toBeCloseTo((110 / 146) * W, 6);
+    expect(result(r, 'muPad')).toBeCloseTo(6 / 37, 9);
+    expect(result(r, 'muJaw')).toBeCloseTo(0.4955, 4);
+    expect(result(r, 'muReq')).toBeCloseTo(110 / 222, 9);
+    expect(result(r, 'Rpin')).toBeCloseTo((W * Math.hypot(222, 36)) / 146, 6);
+    expect(result(r, 'Tlink')).toBeCloseTo(W, 9);
+    expect(result(r, 'Ndesign')).toBeCloseTo(3 * result(r, 'N'), 6);
     expect(verdict(r, 'friction')).toBe('fail');
     expect(verdict(r, 'grips')).toBe('pass');
   });
@@ -47,15 +42,15 @@ describe('plate lifting clamp with a lever jaw: independent hand check', () => {
   it('the pull is vertical: the eye height changes nothing, the load scales everything', () => {
     const low = solve(plateLiftingClamp, { hc: 30 });
     const high = solve(plateLiftingClamp, { hc: 300 });
-    expect(v(high, 'N')).toBeCloseTo(v(low, 'N'), 9);
-    expect(v(solve(plateLiftingClamp, { m: 10 }), 'muReq')).toBeCloseTo(v(low, 'muReq'), 12);
+    expect(result(high, 'N')).toBeCloseTo(result(low, 'N'), 9);
+    expect(result(solve(plateLiftingClamp, { m: 10 }), 'muReq')).toBeCloseTo(result(low, 'muReq'), 12);
   });
 
   it('explains the dead centre when pad, jaw contact and pivot come into line', () => {
     // Collinear when d t + e p = 0: 10·20 + 30 p = 0 at p = −20/3, just below the allowed −4.
     const wide = { ...plateLiftingClamp, inputs: plateLiftingClamp.inputs.map((i) => (i.key === 'p' ? { ...i, min: -10 } : i)) };
     const near = solve(wide, { p: -6 });
-    expect(v(near, 'squeeze')).toBeCloseTo((10 * 50) / (200 - 180), 6);
+    expect(result(near, 'squeeze')).toBeCloseTo((10 * 50) / (200 - 180), 6);
     const at = solve(wide, { p: -20 / 3 });
     expect(at.ok).toBe(false);
     if (at.ok) return;

@@ -2,15 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import type { TemplateSpecInput } from '../../shared/spec/template-spec';
 import { scissorLiftTable } from '../../templates/scissor-lift-table/spec';
+import { D, ok, result, verdict } from '../engine/helpers';
 
 const g = 9.80665;
-const D = Math.PI / 180;
-const solved = (r: ReturnType<typeof solve>) => {
-  if (!r.ok) throw new Error(`${r.error.kind}: ${r.error.message}`);
-  return r;
-};
-const v = (r: ReturnType<typeof solve>, key: string) => solved(r).results.find((x) => x.key === key)!.value!;
-const verdict = (r: ReturnType<typeof solve>, key: string) => solved(r).checks.find((c) => c.key === key)!.verdict;
 
 /** The same table driven instead by a horizontal push on the base roller foot, towards the fixed pin. */
 const footDriven: TemplateSpecInput = {
@@ -35,44 +29,44 @@ describe('scissor lift table: independent hand check', () => {
   const inputs = { m: 2000, mp: 200, mArm: 50, L: 2000, theta: 30, a: 800, b: 1500, Lp: 2200, loadAt: 50, bore: 90 };
 
   it('cylinder force, pressure and the roller forces', () => {
-    const r = solved(solve(scissorLiftTable, inputs));
+    const r = ok(solve(scissorLiftTable, inputs));
     const Weff = 2250 * g;
     const c = Math.sqrt(800 ** 2 + 1500 ** 2 - 2 * 800 * 1500 * Math.cos(30 * D));
     const F = (Weff * 2000 * Math.cos(30 * D) * c) / (800 * 1500 * Math.sin(30 * D));
-    expect(v(r, 'c')).toBeCloseTo(c, 6);
-    expect(v(r, 'F')).toBeCloseTo(F, 4);
-    expect(v(r, 'F')).toBeCloseTo(57380.9, 0);
-    expect(v(r, 'p')).toBeCloseTo(9.020, 3);
-    expect(v(r, 'Fdesign')).toBeCloseTo(2 * F, 4);
-    expect(v(r, 'H')).toBeCloseTo(1000, 9);
+    expect(result(r, 'c')).toBeCloseTo(c, 6);
+    expect(result(r, 'F')).toBeCloseTo(F, 4);
+    expect(result(r, 'F')).toBeCloseTo(57380.9, 0);
+    expect(result(r, 'p')).toBeCloseTo(9.020, 3);
+    expect(result(r, 'Fdesign')).toBeCloseTo(2 * F, 4);
+    expect(result(r, 'H')).toBeCloseTo(1000, 9);
     const ND = (2200 * g * 1100) / (2000 * Math.cos(30 * D));
-    expect(v(r, 'Nplatform')).toBeCloseTo(ND, 6);
-    expect(v(r, 'Nplatform')).toBeCloseTo(13701.7, 0);
-    expect(v(r, 'Rplatform')).toBeCloseTo(2200 * g - ND, 6);
-    expect(v(r, 'Nbase')).toBeCloseTo(-(2200 * g - ND), 6);
+    expect(result(r, 'Nplatform')).toBeCloseTo(ND, 6);
+    expect(result(r, 'Nplatform')).toBeCloseTo(13701.7, 0);
+    expect(result(r, 'Rplatform')).toBeCloseTo(2200 * g - ND, 6);
+    expect(result(r, 'Nbase')).toBeCloseTo(-(2200 * g - ND), 6);
     // The engine's own virtual-work cross-check (drive: θ moves, cylinder effort, load output).
     expect(r.verification.virtualWork!.relativeDifference).toBeLessThan(1e-6);
   });
 
   it('the load position moves the pin forces but not the cylinder force', () => {
-    const F = v(solve(scissorLiftTable, inputs), 'F');
+    const F = result(solve(scissorLiftTable, inputs), 'F');
     const near = solve(scissorLiftTable, { ...inputs, loadAt: 10 });
-    expect(v(near, 'F')).toBeCloseTo(F, 6);
-    expect(v(near, 'Nplatform')).not.toBeCloseTo(v(solve(scissorLiftTable, inputs), 'Nplatform'), 0);
+    expect(result(near, 'F')).toBeCloseTo(F, 6);
+    expect(result(near, 'Nplatform')).not.toBeCloseTo(result(solve(scissorLiftTable, inputs), 'Nplatform'), 0);
   });
 
   it('a horizontal push at the base roller needs F = (W + W_arms/2) / tan θ (one stage)', () => {
     // ../shared/REFERENCES.md gives n (W + W_arms/2)/tan θ; with n = 1 and the 10 kN, 2 kN, 15°
     // example that is 11 000 / tan 15° = 41 052.6 N (half the two-stage 8.211e4 N).
-    const r = solved(solve(footDriven, { m: 10000 / g, mp: 0, mArm: 1000 / g, L: 1500, theta: 15 }));
-    expect(v(r, 'F')).toBeCloseTo(11000 / Math.tan(15 * D), 4);
-    expect(v(r, 'F')).toBeCloseTo(41052.6, 0);
-    expect(Math.abs(v(r, 'F') * 2 - 8.211e4) / 8.211e4).toBeLessThan(1e-4);
+    const r = ok(solve(footDriven, { m: 10000 / g, mp: 0, mArm: 1000 / g, L: 1500, theta: 15 }));
+    expect(result(r, 'F')).toBeCloseTo(11000 / Math.tan(15 * D), 4);
+    expect(result(r, 'F')).toBeCloseTo(41052.6, 0);
+    expect(Math.abs(result(r, 'F') * 2 - 8.211e4) / 8.211e4).toBeLessThan(1e-4);
   });
 
   it('the force peaks at the lowest position: it falls steadily as the arms open', () => {
     const angles = [4, 6, 8, 10, 15, 20, 30, 40, 50, 60];
-    const forces = angles.map((theta) => v(solve(scissorLiftTable, { theta }), 'F'));
+    const forces = angles.map((theta) => result(solve(scissorLiftTable, { theta }), 'F'));
     for (let i = 1; i < forces.length; i++) expect(forces[i]!).toBeLessThan(forces[i - 1]!);
     // Near the bottom F grows like 1/θ: from 8° down to 4° it nearly doubles.
     expect(forces[0]! / forces[2]!).toBeGreaterThan(1.8);
@@ -97,8 +91,8 @@ describe('scissor lift table: independent hand check', () => {
     // A load beyond the roller: the hinge pin holds the platform down, and the base roller,
     // usually lifted, now presses on the base.
     const overhung = solve(scissorLiftTable, { Lp: 4000, loadAt: 100, mp: 0 });
-    expect(v(overhung, 'Nbase')).toBeGreaterThan(0);
-    expect(v(solve(scissorLiftTable, {}), 'Nbase')).toBeLessThan(0);
+    expect(result(overhung, 'Nbase')).toBeGreaterThan(0);
+    expect(result(solve(scissorLiftTable, {}), 'Nbase')).toBeLessThan(0);
     expect(verdict(solve(scissorLiftTable, { Lp: 1200 }), 'rollerOnPlatform')).toBe('fail');
   });
 });

@@ -1,14 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import { scissorLiftingTongs } from '../../templates/scissor-lifting-tongs/spec';
+import { ok, result, verdict } from '../engine/helpers';
 
 const g = 9.80665;
-const ok = (r: ReturnType<typeof solve>) => {
-  if (!r.ok) throw new Error(r.error.message);
-  return r;
-};
-const v = (r: ReturnType<typeof solve>, key: string) => ok(r).results.find((x) => x.key === key)!.value!;
-const verdict = (r: ReturnType<typeof solve>, key: string) => ok(r).checks.find((c) => c.key === key)!.verdict;
 
 describe('scissor lifting tongs: independent hand check', () => {
   it('bent arms on a narrow load, links at 30° from vertical', () => {
@@ -28,15 +23,15 @@ describe('scissor lifting tongs: independent hand check', () => {
     const ay = 500 * Math.sin(up);
     const t30 = Math.tan(Math.PI / 6);
     const N = ((W / 2) * (ax + 100 + ay * t30)) / by;
-    expect(v(r, 'N')).toBeCloseTo(N, 6);
-    expect(v(r, 'N')).toBeCloseTo(21314, -1);
-    expect(v(r, 'muReq')).toBeCloseTo(0.4601, 4);
-    expect(v(r, 'squeeze')).toBeCloseTo(1.0867, 4);
-    expect(v(r, 'F')).toBeCloseTo(W / 2, 6);
-    expect(v(r, 'T')).toBeCloseTo(W / (2 * Math.cos(Math.PI / 6)), 6);
-    expect(v(r, 'Rpin')).toBeCloseTo(N + (W / 2) * t30, 6);
-    expect(v(r, 'L')).toBeCloseTo(ax / Math.sin(Math.PI / 6), 6);
-    expect(v(r, 'Ndesign')).toBeCloseTo(3 * N, 6);
+    expect(result(r, 'N')).toBeCloseTo(N, 6);
+    expect(result(r, 'N')).toBeCloseTo(21314, -1);
+    expect(result(r, 'muReq')).toBeCloseTo(0.4601, 4);
+    expect(result(r, 'squeeze')).toBeCloseTo(1.0867, 4);
+    expect(result(r, 'F')).toBeCloseTo(W / 2, 6);
+    expect(result(r, 'T')).toBeCloseTo(W / (2 * Math.cos(Math.PI / 6)), 6);
+    expect(result(r, 'Rpin')).toBeCloseTo(N + (W / 2) * t30, 6);
+    expect(result(r, 'L')).toBeCloseTo(ax / Math.sin(Math.PI / 6), 6);
+    expect(result(r, 'Ndesign')).toBeCloseTo(3 * N, 6);
     // The left jaw mirrors the right one: same squeeze, friction upwards on the load from both.
     const jaws = ok(r).joints;
     const A = jaws.find((j) => j.id === 'jawA')!;
@@ -51,8 +46,8 @@ describe('scissor lifting tongs: independent hand check', () => {
   it('the friction needed depends on the geometry only, not on the load', () => {
     const light = solve(scissorLiftingTongs, { m: 50 });
     const heavy = solve(scissorLiftingTongs, { m: 20000 });
-    expect(v(light, 'muReq')).toBeCloseTo(v(heavy, 'muReq'), 12);
-    expect(v(heavy, 'N') / v(light, 'N')).toBeCloseTo(400, 9);
+    expect(result(light, 'muReq')).toBeCloseTo(result(heavy, 'muReq'), 12);
+    expect(result(heavy, 'N') / result(light, 'N')).toBeCloseTo(400, 9);
   });
 
   it('passes with the margin, warns inside it and fails without friction enough', () => {
@@ -68,8 +63,8 @@ describe('scissor lifting tongs: independent hand check', () => {
   it('flatter links squeeze harder and pull harder', () => {
     const steep = solve(scissorLiftingTongs, { phi: 20 });
     const flat = solve(scissorLiftingTongs, { phi: 60 });
-    expect(v(flat, 'squeeze')).toBeGreaterThan(v(steep, 'squeeze'));
-    expect(v(flat, 'T')).toBeGreaterThan(v(steep, 'T'));
-    expect(v(flat, 'muReq')).toBeLessThan(v(steep, 'muReq'));
+    expect(result(flat, 'squeeze')).toBeGreaterThan(result(steep, 'squeeze'));
+    expect(result(flat, 'T')).toBeGreaterThan(result(steep, 'T'));
+    expect(result(flat, 'muReq')).toBeLessThan(result(steep, 'muReq'));
   });
 });

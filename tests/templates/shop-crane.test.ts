@@ -1,15 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import { shopCrane } from '../../templates/shop-crane/spec';
+import { D, ok, result, verdict } from '../engine/helpers';
 
 const g = 9.80665;
-const D = Math.PI / 180;
-const solved = (r: ReturnType<typeof solve>) => {
-  if (!r.ok) throw new Error(`${r.error.kind}: ${r.error.message}`);
-  return r;
-};
-const v = (r: ReturnType<typeof solve>, key: string) => solved(r).results.find((x) => x.key === key)!.value!;
-const verdict = (r: ReturnType<typeof solve>, key: string) => solved(r).checks.find((c) => c.key === key)!.verdict;
 
 describe('shop crane: independent hand check', () => {
   // Hand check (ours): 800 kg on a 1.2 m boom pulled out 0.1 m (L_t = 1.3 m) at φ = 10°, pivot
@@ -38,38 +32,38 @@ describe('shop crane: independent hand check', () => {
     const c = Math.hypot(Bx - 100, By - 250);
     const C = ((W + Wb / 2) * 1300 * Math.cos(10 * D) * c) / (600 * (1150 * Math.cos(10 * D) + 100 * Math.sin(10 * D)));
     const Nrear = (Wbase * 900 + Wb * (1300 - 650 * Math.cos(10 * D)) + W * (1300 - 1300 * Math.cos(10 * D))) / 1600;
-    expect(v(r, 'ramLength')).toBeCloseTo(c, 6);
-    expect(v(r, 'C')).toBeCloseTo(C, 5);
-    expect(v(r, 'C')).toBeCloseTo(19974.6, 0);
-    expect(v(r, 'Cdesign')).toBeCloseTo(3 * C, 5);
-    expect(v(r, 'Rpivot')).toBeCloseTo(Math.hypot((C * (Bx - 100)) / c, W + Wb - (C * (By - 250)) / c), 5);
-    expect(v(r, 'Rpivot')).toBeCloseTo(12745.0, 0);
-    expect(v(r, 'Nrear')).toBeCloseTo(Nrear, 6);
-    expect(v(r, 'Nrear')).toBeCloseTo(714.64, 1);
-    expect(v(r, 'Nfront')).toBeCloseTo(W + Wb + Wbase - Nrear, 6);
-    expect(v(r, 'rearShare')).toBeCloseTo((100 * Nrear) / (W + Wb + Wbase), 6);
-    expect(v(r, 'rearShare')).toBeCloseTo(7.92, 2);
+    expect(result(r, 'ramLength')).toBeCloseTo(c, 6);
+    expect(result(r, 'C')).toBeCloseTo(C, 5);
+    expect(result(r, 'C')).toBeCloseTo(19974.6, 0);
+    expect(result(r, 'Cdesign')).toBeCloseTo(3 * C, 5);
+    expect(result(r, 'Rpivot')).toBeCloseTo(Math.hypot((C * (Bx - 100)) / c, W + Wb - (C * (By - 250)) / c), 5);
+    expect(result(r, 'Rpivot')).toBeCloseTo(12745.0, 0);
+    expect(result(r, 'Nrear')).toBeCloseTo(Nrear, 6);
+    expect(result(r, 'Nrear')).toBeCloseTo(714.64, 1);
+    expect(result(r, 'Nfront')).toBeCloseTo(W + Wb + Wbase - Nrear, 6);
+    expect(result(r, 'rearShare')).toBeCloseTo((100 * Nrear) / (W + Wb + Wbase), 6);
+    expect(result(r, 'rearShare')).toBeCloseTo(7.92, 2);
     expect(verdict(r, 'tipping')).toBe('warn');
     // Front wheels pinned only to fix the frame: with vertical loads they take no horizontal force.
-    const front = solved(r).joints.find((j) => j.id === 'front')!;
+    const front = ok(r).joints.find((j) => j.id === 'front')!;
     expect(Math.abs(front.fx)).toBeLessThan(1e-9 * W);
   });
 
   it('the ram force is set by the boom alone: moving the wheels or the base weight leaves it unchanged', () => {
-    const C = v(solve(shopCrane, inputs), 'C');
-    expect(v(solve(shopCrane, { ...inputs, xF: 1800, mBase: 200 }), 'C')).toBeCloseTo(C, 6);
+    const C = result(solve(shopCrane, inputs), 'C');
+    expect(result(solve(shopCrane, { ...inputs, xF: 1800, mBase: 200 }), 'C')).toBeCloseTo(C, 6);
   });
 
   it('tipping: passes retracted, fails with the boom pulled out under the full load', () => {
     const retracted = solve(shopCrane, {});
     expect(verdict(retracted, 'tipping')).toBe('pass');
-    expect(v(retracted, 'rearShare')).toBeGreaterThan(10);
+    expect(result(retracted, 'rearShare')).toBeGreaterThan(10);
     const extended = solve(shopCrane, { ext: 900 });
-    expect(v(extended, 'Nrear')).toBeLessThan(0);
+    expect(result(extended, 'Nrear')).toBeLessThan(0);
     expect(verdict(extended, 'tipping')).toBe('fail');
     // Each extra millimetre of hook overhang takes W/wheelbase off the rear castors.
-    const a = v(solve(shopCrane, { ext: 400, mBoom: 0 }), 'Nrear');
-    const b = v(solve(shopCrane, { ext: 500, mBoom: 0 }), 'Nrear');
+    const a = result(solve(shopCrane, { ext: 400, mBoom: 0 }), 'Nrear');
+    const b = result(solve(shopCrane, { ext: 500, mBoom: 0 }), 'Nrear');
     expect(a - b).toBeCloseTo((1000 * g * 100 * Math.cos(20 * D)) / 1400, 6);
   });
 
@@ -77,7 +71,7 @@ describe('shop crane: independent hand check', () => {
     expect(verdict(solve(shopCrane, {}), 'ramAngle')).toBe('pass');
     // Boom raised to 65° with the ram pin far out: the ram lies nearly along the boom.
     const flat = solve(shopCrane, { phi: 65, rAt: 1200, hq: 700, dq: -200 });
-    expect(v(flat, 'ramAngle')).toBeLessThan(20);
+    expect(result(flat, 'ramAngle')).toBeLessThan(20);
     expect(verdict(flat, 'ramAngle')).toBe('warn');
   });
 });

@@ -2,14 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { solve } from '../../shared/mechanics/solve';
 import type { TemplateSpecInput } from '../../shared/spec/template-spec';
 import { toggleClamp } from '../../templates/toggle-clamp/spec';
+import { D, ok, result } from '../engine/helpers';
 
-const D = Math.PI / 180;
-type Solved = Extract<ReturnType<typeof solve>, { ok: true }>;
-const ok = (r: ReturnType<typeof solve>): Solved => {
-  if (!r.ok) throw new Error(`${r.error.kind}: ${r.error.message}`);
-  return r;
-};
-const v = (r: Solved, key: string) => r.results.find((x) => x.key === key)!.value!;
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 /**
@@ -66,20 +60,20 @@ describe('toggle clamp: independent hand check', () => {
     expect(cf.theta).toBeCloseTo(0.698, 3);
     expect(cf.Q).toBeCloseTo(1289.4, 1);
     const r = ok(solve(toggleClamp, { F: 120, alpha: 10, Lh: 150, r: 40, l: 40, e: 25, La: 50 }));
-    expect(rel(v(r, 'S'), cf.S)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'Q'), cf.Q)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'MA'), cf.MA)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'RA'), cf.RA)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'RH'), cf.RH)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'S'), cf.S)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Q'), cf.Q)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'MA'), cf.MA)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'RA'), cf.RA)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'RH'), cf.RH)).toBeLessThan(1e-9);
     expect(r.verification.virtualWork!.relativeDifference).toBeLessThan(1e-6);
   });
 
   it.each([2, 5, 12, 20, 30])('follows the closed form at α = %d° and virtual work agrees', (alpha) => {
     const cf = toggleClampClosedForm({ ...defaults, alpha });
     const r = ok(solve(toggleClamp, { alpha }));
-    expect(rel(v(r, 'Q'), cf.Q)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'RA'), cf.RA)).toBeLessThan(1e-9);
-    expect(rel(v(r, 'RH'), cf.RH)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'Q'), cf.Q)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'RA'), cf.RA)).toBeLessThan(1e-9);
+    expect(rel(result(r, 'RH'), cf.RH)).toBeLessThan(1e-9);
     expect(r.verification.maxResidual).toBeLessThan(1e-9);
   });
 
@@ -101,15 +95,15 @@ describe('toggle clamp: near and at dead centre', () => {
     const limit = (defaults.Lh * defaults.e) / (defaults.r * defaults.La);
     const product = [0.05, 0.2, 1, 4].map((alpha) => {
       const r = ok(solve(toZero, { alpha }));
-      return v(r, 'MA') * Math.tan(alpha * D);
+      return result(r, 'MA') * Math.tan(alpha * D);
     });
     expect(rel(product[0]!, limit)).toBeLessThan(1e-5);
     expect(rel(product[1]!, limit)).toBeLessThan(1e-4);
     expect(rel(product[2]!, limit)).toBeLessThan(2e-3);
     expect(rel(product[3]!, limit)).toBeLessThan(2e-2);
     // Halving the angle near dead centre doubles the clamping force.
-    const q1 = v(ok(solve(toZero, { alpha: 1 })), 'Q');
-    const q05 = v(ok(solve(toZero, { alpha: 0.5 })), 'Q');
+    const q1 = result(ok(solve(toZero, { alpha: 1 })), 'Q');
+    const q05 = result(ok(solve(toZero, { alpha: 0.5 })), 'Q');
     expect(q05 / q1).toBeCloseTo(Math.tan(D) / Math.tan(0.5 * D), 3);
   });
 
