@@ -47,7 +47,11 @@ export function unitOf(quantity: Quantity, system: UnitSystem): string {
 
 /** Internal (SI-mm) value → value in the chosen system. */
 export function toDisplay(value: number, quantity: Quantity, system: UnitSystem): number {
-  return value * UNIT_TABLE[system][quantity].factor;
+  const { factor } = UNIT_TABLE[system][quantity];
+  if (factor === 1) return value;
+  // 15 significant digits: what a double holds for certain. Without it an input sent as 59 in
+  // comes back from the round trip through mm as 58.99999999999999.
+  return Number((value * factor).toPrecision(15));
 }
 
 /** Value in the chosen system → internal (SI-mm) value. */

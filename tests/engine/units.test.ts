@@ -19,6 +19,14 @@ describe('units', () => {
     expect(unitOf('length', 'SI')).toBe('mm');
   });
 
+  it('give back a value typed in US units exactly, not with a last-digit error from the trip through SI', () => {
+    for (const typed of [59, 157.5, 0.1, 12.7, 4409.25, 1e-3]) {
+      for (const quantity of ['length', 'force', 'mass', 'moment', 'stress'] as const) {
+        expect(toDisplay(fromDisplay(typed, quantity, 'US'), quantity, 'US')).toBe(typed);
+      }
+    }
+  });
+
   it('round-trip every quantity', () => {
     for (const q of ['length', 'force', 'mass', 'angle', 'moment', 'stress', 'ratio', 'coefficient', 'percent', 'count'] as const) {
       expect(fromDisplay(toDisplay(123.456, q, 'US'), q, 'US')).toBeCloseTo(123.456, 10);
