@@ -218,9 +218,8 @@ export class BatchedRateLimitStore implements Store {
         c.viewAt = sentAt;
         for (const w of waiters) w.resolve(row.hits - n + w.place + 1);
       } else {
-        // The database has them all the same; count them here without a fresh view.
+        // Counted in a window that has ended (or a row reset meanwhile): they do not count now.
         for (const w of waiters) w.resolve(c.shared + c.inflight + w.place + 1);
-        c.shared += Math.max(n, 0);
       }
     }
     if (batch.some(({ c }) => c.pending !== 0)) this.schedule();
