@@ -112,7 +112,7 @@ export function problemErrorHandler(logger: Logger): ErrorRequestHandler {
       });
       return;
     }
-    (req.log ?? logger).error({ err: error }, 'unhandled error');
+    logger.error({ err: error, reqId: req.id, method: req.method, url: req.originalUrl }, 'unhandled error');
     sendProblem(req, res, {
       type: problemTypes.internal,
       title: 'Internal server error',

@@ -24,6 +24,7 @@ import type { ApiKeyService } from '../services/api-keys/api-keys';
 import type { UsageRecorder } from '../services/api-keys/usage-recorder';
 import { chartFormat, chartIdentity, chartTagPart, sendSvg } from '../services/api-v1/chart-negotiation';
 import { chartRenderer } from '../services/api-v1/chart-renderer';
+import { AnswerCache } from '../services/api-v1/answer-cache';
 import { openApiDocument } from '../services/api-v1/openapi-document';
 import { defaultSpecCheckLimits, solveSpecForApi, validateSpecForApi, type SpecCheckLimits } from '../services/api-v1/spec-check';
 import type { V1Catalogue } from '../services/api-v1/v1-catalogue';
@@ -83,6 +84,16 @@ export function v1Router(deps: V1Deps): express.Router {
   const router = express.Router();
   const document = openApiDocument(v1Operations, deps.version);
   const specSchema = specJsonSchema();
+  const answers = new AnswerCache();
+  /** A deterministic answer under its ETag: from the cache, or made, serialised once and kept. */
+  const sendAnswer = async (res: Response, tag: string, make: () => Promise<unknown>): Promise<void> => {
+    let answer = answers.get(tag);
+    if (answer === undefined) {
+      answer = JSON.stringify(await make());
+      answers.set(tag, answer);
+    }
+    res.type('application/json').send(answer);
+  };
 
   const limitOf = (req: Request) => apiKeyOf(req).ratePerMinute ?? limits.perWindow;
   const limitStore = deps.rateLimitStore ?? new BatchedRateLimitStore(deps.db, 'api-v1:', { syncMs: limits.rateSyncMs, logger: deps.logger });
@@ -129,8 +140,9 @@ export function v1Router(deps: V1Deps): express.Router {
       const slug = slugOf(req);
       const b = parseOrThrow(v1SolveRequestSchema, body(req));
       const v = await catalogue.resolve(slug, b.version);
-      if (notModified(req, res, etagFor(v.row.contentHash, { op: 'solve', inputs: b.inputs, units: b.units }))) return;
-      res.json(await catalogue.solve(slug, v.row.semver, b.inputs, b.units));
+      const tag = etagFor(v.row.contentHash, { op: 'solve', inputs: b.inputs, units: b.units });
+      if (notModified(req, res, tag)) return;
+      await sendAnswer(res, tag, () => catalogue.solve(slug, v.row.semver, b.inputs, b.units));
     },
     sweepTemplate: async (req, res) => {
       const format = chartFormat(req, res);
@@ -139,8 +151,8 @@ export function v1Router(deps: V1Deps): express.Router {
       const v = await catalogue.resolve(slug, b.version);
       const tag = etagFor(v.row.contentHash, { op: 'sweep', inputs: b.inputs, units: b.units, sweep: b.sweep, ...chartTagPart(format) });
       if (notModified(req, res, tag)) return;
+      if (format === 'json') return sendAnswer(res, tag, () => catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units));
       const out = await catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units);
-      if (format === 'json') return void res.json(out);
       sendSvg(res, await chartRenderer.sweep(tag, chartIdentity(v, b.units), out.sweep), `${slug}-${out.version}-sweep-${b.sweep.input}.svg`);
     },
     sensitivityTemplate: async (req, res) => {
@@ -150,8 +162,8 @@ export function v1Router(deps: V1Deps): express.Router {
       const v = await catalogue.resolve(slug, b.version);
       const tag = etagFor(v.row.contentHash, { op: 'sensitivity', inputs: b.inputs, units: b.units, tornado: b.tornado, ...chartTagPart(format) });
       if (notModified(req, res, tag)) return;
+      if (format === 'json') return sendAnswer(res, tag, () => catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units));
       const out = await catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units);
-      if (format === 'json') return void res.json(out);
       sendSvg(res, await chartRenderer.tornado(tag, chartIdentity(v, b.units), out.tornado), `${slug}-${out.version}-sensitivity-${b.tornado.result}.svg`);
     },
     specSchema: (_req, res) => {

@@ -44,4 +44,23 @@ describe('request log', () => {
     expect(text).not.toMatch(/do-not-log/);
     expect(text).not.toMatch(/"headers"/);
   });
+
+  it('logs a refused request as a warning with its status and time, and gives each request its own id', async () => {
+    const { logger, lines } = capturingLogger();
+    const app = appFor(database, { logger });
+    expect((await request(app).get('/api/no-such-thing')).status).toBe(404);
+    expect((await request(app).get('/api/health').set('X-Request-Id', 'not ok: spaces')).status).toBe(200);
+    await new Promise((r) => setTimeout(r, 20));
+    const entries = lines.map((l) => JSON.parse(l) as { level: number; msg: string; req: { id: string; url: string }; res: { statusCode: number }; responseTime: number }).filter((e) => e.msg === 'request completed');
+    const refused = entries.find((e) => e.req.url === '/api/no-such-thing')!;
+    expect(refused.level).toBe(40); // pino's warn
+    expect(refused.res.statusCode).toBe(404);
+    expect(refused.responseTime).toBeGreaterThanOrEqual(0);
+    const health = entries.find((e) => e.req.url === '/api/health')!;
+    expect(health.level).toBe(30);
+    // An id that is not a plain token is replaced, not logged as sent.
+    expect(health.req.id).toMatch(/^[0-9a-f-]{36}$/);
+    expect(refused.req.id).not.toBe(health.req.id);
+  });
 });
+

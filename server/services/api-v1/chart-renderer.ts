@@ -1,3 +1,4 @@
+import { LRUCache } from 'lru-cache';
 import type { SweepOutput, TornadoOutput } from '../../../shared/mechanics/sensitivity-schema';
 import { sweepSvg, tornadoSvg, type ChartIdentity } from './chart-svg';
 import { ChartWorkerPool } from './chart-worker-pool';
@@ -11,25 +12,22 @@ export const CHART_LAYOUT_REVISION = 1;
  * same chart to every visitor costs one render.
  */
 export class ChartRenderer {
-  private readonly cache = new Map<string, Promise<string>>();
+  private readonly cache: LRUCache<string, Promise<string>>;
 
   constructor(
     private readonly pool = new ChartWorkerPool(),
-    private readonly cacheSize = 200,
-  ) {}
+    cacheSize = 200,
+  ) {
+    this.cache = new LRUCache({ max: cacheSize });
+  }
 
+  /** Requests for one chart while it is being drawn share the drawing; a failed one is forgotten. */
   private remember(key: string, make: () => Promise<string>): Promise<string> {
     const hit = this.cache.get(key);
-    if (hit) {
-      // Most recently used last, so the oldest is the first key.
-      this.cache.delete(key);
-      this.cache.set(key, hit);
-      return hit;
-    }
+    if (hit) return hit;
     const made = make();
     this.cache.set(key, made);
     made.catch(() => this.cache.delete(key));
-    while (this.cache.size > this.cacheSize) this.cache.delete(this.cache.keys().next().value!);
     return made;
   }
 
