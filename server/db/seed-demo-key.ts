@@ -67,7 +67,7 @@ export async function retireDemoApiKey(db: Database): Promise<boolean> {
     .where(and(eq(apiKeys.prefix, demoApiKeyPrefix), isNull(apiKeys.revokedAt)))
     .returning({ id: apiKeys.id });
   if (!revoked.length) return false;
-  await recordAudit(db, { actorKind: 'system', action: 'api-key.revoke', target: revoked[0]!.id, details: { prefix: demoApiKeyPrefix, reason: 'demo key found at a production start' } });
+  await recordAudit(db, { actorKind: 'system', action: 'api-key.revoked', target: revoked[0]!.id, details: { prefix: demoApiKeyPrefix, reason: 'demo key found at a production start' } });
   return true;
 }
 

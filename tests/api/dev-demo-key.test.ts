@@ -92,7 +92,7 @@ describe('the demo key in the database', () => {
     expect(await demoApiKeyAtStart(database.db, 'production')).toEqual({ key: null, retired: true });
     const [row] = await demoRows();
     expect(row!.revokedAt).toBeInstanceOf(Date);
-    const audits = await database.db.select().from(auditLog).where(and(eq(auditLog.action, 'api-key.revoke'), eq(auditLog.target, row!.id)));
+    const audits = await database.db.select().from(auditLog).where(and(eq(auditLog.action, 'api-key.revoked'), eq(auditLog.target, row!.id)));
     expect(audits).toHaveLength(1);
     expect(audits[0]).toMatchObject({ actorKind: 'system' });
 

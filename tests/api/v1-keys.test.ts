@@ -11,9 +11,11 @@ import { createKey, expectProblem, seedV1, v1App, type V1Test } from './v1-fixtu
 
 let database: DatabaseHandle;
 let t: V1Test;
+const shared = { supplierOrgId: '' };
 beforeAll(async () => {
   database = await openTestDatabase();
   const { supplierOrgId } = await seedV1(database);
+  shared.supplierOrgId = supplierOrgId;
   t = await v1App(database, supplierOrgId);
 }, 120_000);
 afterAll(async () => {
@@ -153,6 +155,9 @@ describe('API keys', () => {
   });
 
   it('count usage per key, endpoint and day in batches, with the last use', async () => {
+    // A flush interval no test run reaches, so only the explicit flush below can write (a busy
+    // machine must not turn the one-second default into a write before the first check).
+    const t = await v1App(database, shared.supplierOrgId, { flushMs: 600_000 });
     const { key, info } = await createKey(t, { name: 'Counted' });
     for (let i = 0; i < 3; i++) await request(t.app).post(solve).set(bearer(key)).send({ inputs: { L: 3000 + i } }).expect(200);
     await request(t.app).get(list).set(bearer(key)).expect(200);
