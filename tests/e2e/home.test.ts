@@ -138,7 +138,10 @@ describe('the built app served by the Pinwork server', () => {
     });
     await page.goto(`${server.url}/developers/api`, { waitUntil: 'networkidle' });
     await page.locator('.pinwork-openapi .opblock').first().waitFor();
-    expect(await page.locator('main').textContent()).not.toContain('pw_sk_');
+    expect(await page.locator('#main').textContent()).not.toContain('bwdemo');
+    expect(await page.getByText('Try it out with your own key').isVisible()).toBe(true);
+    // One main landmark: the viewer's own is turned into a region.
+    expect(await page.getByRole('main').count()).toBe(1);
     expect(asked).toEqual([]);
     expect(problems.all()).toEqual([]);
   });

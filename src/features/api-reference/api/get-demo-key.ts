@@ -1,5 +1,4 @@
-import { queryOptions, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { healthQueryOptions } from '../../health/api/get-health';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { demoApiKeySchema, type DemoApiKey } from '../../../../shared/api/demo-key';
 import { ApiError, apiRequest } from '../../../lib/api-client';
 
@@ -13,17 +12,16 @@ export async function getDemoKey(signal?: AbortSignal): Promise<DemoApiKey | nul
   }
 }
 
-export function demoKeyQueryOptions(queryClient: QueryClient) {
+export function demoKeyQueryOptions() {
   return queryOptions({
     queryKey: ['dev', 'demo-key'],
-    // Only a development server has the key: ask it how it runs first, so a production page
-    // makes no request that must fail.
-    queryFn: async ({ signal }) => ((await queryClient.fetchQuery(healthQueryOptions())).mode === 'development' ? getDemoKey(signal) : null),
+    queryFn: ({ signal }) => getDemoKey(signal),
     staleTime: Infinity,
     retry: false,
   });
 }
 
-export function useDemoKey() {
-  return useQuery(demoKeyQueryOptions(useQueryClient()));
+/** Asked only when `enabled`: on a server that says it runs in development. */
+export function useDemoKey(enabled: boolean) {
+  return useQuery({ ...demoKeyQueryOptions(), enabled });
 }

@@ -8,9 +8,18 @@ import { ApiGuide } from './api-guide';
 import { DemoKeyNotice } from './demo-key-notice';
 import { OpenApiViewer } from './openapi-viewer';
 
-export function ApiReferencePage() {
+interface Props {
+  /** How the server runs (from its health answer); undefined while that is not known yet. */
+  serverMode: 'development' | 'production' | 'test' | undefined;
+}
+
+export function ApiReferencePage({ serverMode }: Props) {
   const document = useOpenApiDocument();
-  const demoKey = useDemoKey();
+  // Only a development server has the demo key, so a production page asks for nothing that must fail.
+  const wantsKey = serverMode === 'development';
+  const demoKey = useDemoKey(wantsKey);
+  const keyPending = serverMode === undefined || (wantsKey && demoKey.isPending);
+  const key = wantsKey ? (demoKey.data ?? null) : null;
   return (
     <Page
       title="API reference"
@@ -33,7 +42,7 @@ export function ApiReferencePage() {
         <h2 id="operations-heading" className="text-2xl font-extrabold tracking-tight text-ink-950">
           Operations
         </h2>
-        <div className="mt-4 max-w-3xl">{demoKey.isPending ? null : <DemoKeyNotice demoKey={demoKey.data ?? null} />}</div>
+        <div className="mt-4 max-w-3xl">{keyPending ? null : <DemoKeyNotice demoKey={key} />}</div>
         {document.isPending && (
           <p role="status" className="mt-4 text-sm text-ink-700">
             Loading the API description…
@@ -46,9 +55,9 @@ export function ApiReferencePage() {
             </Notice>
           </div>
         )}
-        {document.data && !demoKey.isPending && (
+        {document.data && !keyPending && (
           <div className="mt-4">
-            <OpenApiViewer document={document.data} demoKey={demoKey.data?.key ?? null} />
+            <OpenApiViewer document={document.data} demoKey={key?.key ?? null} />
           </div>
         )}
       </section>

@@ -31,8 +31,26 @@ export function OpenApiViewer({ document, demoKey }: { document: OpenApiDocument
     if (demoKey && system.current) system.current.preauthorizeApiKey(SCHEME, demoKey);
   }, [demoKey]);
 
+  // The viewer wraps its operations in a <main> of its own, inside the page's <main>: a page
+  // has one main landmark, so the viewer's becomes a labelled region, whenever it re-renders.
+  const box = useRef<HTMLDivElement>(null);
+  useEffect(() => {
+    const root = box.current;
+    if (!root) return;
+    const demote = () => {
+      for (const inner of root.querySelectorAll('main:not([role])')) {
+        inner.setAttribute('role', 'region');
+        inner.setAttribute('aria-label', 'Operations of the API');
+      }
+    };
+    demote();
+    const watcher = new MutationObserver(demote);
+    watcher.observe(root, { childList: true, subtree: true });
+    return () => watcher.disconnect();
+  }, []);
+
   return (
-    <div className="pinwork-openapi">
+    <div className="pinwork-openapi" ref={box}>
       <SwaggerUI
         spec={spec}
         plugins={plugins}
