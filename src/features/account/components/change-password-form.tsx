@@ -4,7 +4,7 @@ import { primaryButtonClass } from '../../../components/form-styles';
 import { Notice } from '../../../components/notice';
 import { TextField } from '../../../components/text-field';
 import { fieldErrorsFromIssues, formErrorsFrom, withFieldName } from '../../../lib/form-errors';
-import { PasswordHint } from '../../auth/components/password-hint';
+import { PasswordHint } from '../../../components/password-hint';
 import { useChangePassword } from '../api/change-password';
 
 /** Change the password while signed in: the current one, the new one twice, and whether to end other sessions. */

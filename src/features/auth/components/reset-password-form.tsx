@@ -7,7 +7,7 @@ import { TextField } from '../../../components/text-field';
 import { ApiError } from '../../../lib/api-client';
 import { fieldErrorsFromIssues, formErrorsFrom, withFieldName } from '../../../lib/form-errors';
 import { useResetPassword } from '../api/reset-password';
-import { PasswordHint } from './password-hint';
+import { PasswordHint } from '../../../components/password-hint';
 
 export function ResetPasswordForm({ token }: { token: string }) {
   const [password, setPassword] = useState('');

@@ -5,7 +5,7 @@ import { Notice } from '../../../components/notice';
 import { TextField } from '../../../components/text-field';
 import { fieldErrorsFromIssues, formErrorsFrom, withFieldName } from '../../../lib/form-errors';
 import { useSignUp } from '../api/sign-up';
-import { PasswordHint } from './password-hint';
+import { PasswordHint } from '../../../components/password-hint';
 
 /** Name, e-mail and a new password; the server's answer is the same whether or not the address is known. */
 export function SignUpForm({ onSignedUp }: { onSignedUp: (email: string) => void }) {
