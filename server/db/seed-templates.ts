@@ -74,7 +74,7 @@ export async function seedBuiltInTemplates(db: Database, specs: readonly Templat
         contentHash: hash,
         changelog: latest ? `Built-in template updated (was ${latest}).` : 'First published version of the built-in template.',
         publishedAt: new Date(),
-        validatorScript: inputValidatorScript(inputJsonSchema(spec), hash),
+        validatorScript: await inputValidatorScript(inputJsonSchema(spec), hash),
       });
       // Only a version written here is a publication: a restart that finds it stored records nothing.
       await recordAudit(tx, {

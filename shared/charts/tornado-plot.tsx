@@ -12,8 +12,6 @@ export interface TornadoPlotProps {
   axisTitle?: boolean;
 }
 
-/** Height that gives each bar room for its label, as the app sizes the box. */
-export const tornadoHeight = (bars: number) => Math.max(160, bars * 44 + 60);
 
 /** The tornado bars, props only: the app and the server's SVG answer draw this same tree. */
 export function TornadoPlot({ chart, size, axisTitle = false }: TornadoPlotProps) {

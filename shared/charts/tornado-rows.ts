@@ -46,3 +46,6 @@ export function prepareTornado(tornado: TornadoOutput, system: UnitSystem, paylo
     axisLabel: unit ? `${tornado.result.label} (${unit})` : tornado.result.label,
   };
 }
+
+/** Height that gives each bar room for its label, as the app sizes the box. */
+export const tornadoHeight = (bars: number) => Math.max(160, bars * 44 + 60);

@@ -1,7 +1,6 @@
 import { CHART_INK } from '../../../shared/charts/chart-colours';
 import { prepareSweep, type PreparedSweep } from '../../../shared/charts/sweep-rows';
-import { tornadoHeight } from '../../../shared/charts/tornado-plot';
-import { prepareTornado, type PreparedTornado } from '../../../shared/charts/tornado-rows';
+import { prepareTornado, tornadoHeight, type PreparedTornado } from '../../../shared/charts/tornado-rows';
 import { el, num, text } from '../../../shared/drawing/svg-markup';
 import type { SweepOutput, TornadoOutput } from '../../../shared/mechanics/sensitivity-schema';
 import { formatNumber } from '../../../shared/units/format';

@@ -1,7 +1,7 @@
 import { useId, useMemo, useState } from 'react';
 import { formatNumber } from '../../../../shared/units/format';
-import { TornadoPlot, tornadoHeight } from '../../../../shared/charts/tornado-plot';
-import { prepareTornado } from '../../../../shared/charts/tornado-rows';
+import { TornadoPlot } from '../../../../shared/charts/tornado-plot';
+import { prepareTornado, tornadoHeight } from '../../../../shared/charts/tornado-rows';
 import type { UnitSystem } from '../../../../shared/units/unit-systems';
 import { ApiError } from '../../../lib/api-client';
 import { useSensitivity } from '../api/get-sensitivity';
