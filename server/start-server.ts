@@ -52,7 +52,7 @@ export async function startServer(
       snapshotFile: config.snapshotFile,
       logger,
     });
-    const seeded = await seedDemoData(database.db);
+    const seeded = await seedDemoData(database.db, { people: config.mode !== 'production' });
     logger.info({ seeded }, 'demo data checked');
     const seededTemplates = await seedBuiltInTemplates(database.db, builtInTemplates, 'tallow-ridge-engineering');
     logger.info({ seededTemplates }, 'built-in templates checked');

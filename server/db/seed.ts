@@ -10,17 +10,25 @@ export interface SeedReport {
   members: number;
 }
 
+export interface SeedOptions {
+  /** The demo people and their memberships; a production start seeds only the organisations. */
+  people?: boolean;
+}
+
 /**
  * Runs on every start. Each insert is keyed on a unique column and skips rows that exist, so a
- * second run inserts nothing and never overwrites what users have changed since.
+ * second run inserts nothing and never overwrites what users have changed since. The demo
+ * engineering organisation owns the built-in templates, so organisations are always seeded;
+ * the fictional people only where demo accounts exist (development and tests).
  */
-export async function seedDemoData(db: Database): Promise<SeedReport> {
+export async function seedDemoData(db: Database, options: SeedOptions = {}): Promise<SeedReport> {
   return db.transaction(async (tx) => {
     const insertedOrganisations = await tx
       .insert(organisations)
       .values(demoOrganisations.map((o) => ({ slug: o.slug, name: o.name, kind: o.kind })))
       .onConflictDoNothing({ target: organisations.slug })
       .returning({ id: organisations.id });
+    if (options.people === false) return { organisations: insertedOrganisations.length, users: 0, members: 0 };
 
     const insertedUsers = await tx
       .insert(users)

@@ -69,4 +69,19 @@ describe('demo seed', () => {
     const [row] = await db.select({ name: users.name }).from(users).where(eq(users.email, admin.email));
     expect(row?.name).toBe('Renamed by the admin');
   });
+
+  it('seeds only the organisations when asked for no people, as a production start does', async () => {
+    const fresh = await openTestDatabase();
+    try {
+      const report = await seedDemoData(fresh.db, { people: false });
+      expect(report).toEqual({ organisations: demoOrganisations.length, users: 0, members: 0 });
+      const emails = (await fresh.db.select({ email: users.email }).from(users)).map((r) => r.email);
+      for (const person of demoUsers) expect(emails).not.toContain(person.email);
+      const slugs = (await fresh.db.select({ slug: organisations.slug }).from(organisations)).map((r) => r.slug);
+      for (const organisation of demoOrganisations) expect(slugs).toContain(organisation.slug);
+    } finally {
+      await fresh.close();
+    }
+  });
 });
+
