@@ -1,6 +1,6 @@
 import { and, eq } from 'drizzle-orm';
 import request from 'supertest';
-import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { DatabaseHandle } from '../../server/db/database';
 import { apiKeys } from '../../server/db/schema/api-access';
 import { auditLog } from '../../server/db/schema/audit';
@@ -10,8 +10,8 @@ import { v1Operations } from '../../server/routes/v1-operations';
 import { demoApiKeySchema } from '../../shared/api/demo-key';
 import { apiProblemTypes } from '../../shared/api/v1';
 import { ORIGIN, authApp } from '../helpers/auth-fixture';
-import { makeTempDir, startServerProcess, stopProcess, type ServerProcess } from '../helpers/server-process';
-import { createPostgresCopy, openTestDatabase, pgliteSnapshotFile } from '../helpers/test-database';
+import { type ServerProcess, serverProcesses, stopProcess } from '../helpers/server-process';
+import { openTestDatabase } from '../helpers/test-database';
 import { seedV1 } from './v1-fixture';
 
 // The development demo key of Brightwater Rigging Supply: seeded at a development start only,
@@ -109,23 +109,8 @@ describe('the demo key in the database', () => {
 });
 
 // The real server: what `npm start` prints and serves in each mode, on one data folder.
-const started: ServerProcess[] = [];
-const cleanups: (() => unknown)[] = [];
-afterEach(async () => {
-  await Promise.all(started.splice(0).map(stopProcess));
-  for (const cleanup of cleanups.splice(0)) await cleanup();
-});
-
-async function newDataHome(): Promise<Record<string, string>> {
-  const postgres = await createPostgresCopy();
-  if (postgres) {
-    cleanups.push(() => postgres.drop());
-    return { DATABASE_URL: postgres.url };
-  }
-  const temp = makeTempDir('demo-key');
-  cleanups.push(() => temp.remove());
-  return { DATA_DIR: temp.dir, DB_SNAPSHOT: pgliteSnapshotFile() };
-}
+const processes = serverProcesses('demo-key');
+const newDataHome = processes.newDataHome;
 
 /** The start message is written in pieces after the ready line; wait for the piece asked for. */
 async function printed(server: ServerProcess, text: string): Promise<string> {
@@ -139,16 +124,14 @@ const production = { NODE_ENV: 'production', AUTH_SECRET: 'demo-key-test-secret-
 describe('the demo key at a real start', { timeout: 120_000 }, () => {
   it('is printed and served in development; production prints nothing, answers 404 and refuses the key', async () => {
     const home = await newDataHome();
-    const dev = startServerProcess({ ...home, NODE_ENV: 'development', SMTP_URL: 'smtp://127.0.0.1:9' });
-    started.push(dev);
+    const dev = processes.start({ ...home, NODE_ENV: 'development', SMTP_URL: 'smtp://127.0.0.1:9' });
     const devUrl = await dev.ready;
     expect(await printed(dev, '/developers/api')).toContain(`Demo API key (development only, Brightwater Rigging Supply; scopes read, solve, sweep, sensitivity, author):\n  ${demoApiKey.key}\n`);
     expect((await fetch(`${devUrl}/api/dev/demo-key`)).status).toBe(200);
     expect((await fetch(`${devUrl}/api/v1/templates`, { headers: bearer })).status).toBe(200);
     await stopProcess(dev);
 
-    const prod = startServerProcess({ ...home, ...production });
-    started.push(prod);
+    const prod = processes.start({ ...home, ...production });
     const prodUrl = await prod.ready;
     expect(prod.output()).not.toContain('Demo API key');
     expect(prod.output()).not.toContain(demoApiKey.key);
@@ -161,8 +144,7 @@ describe('the demo key at a real start', { timeout: 120_000 }, () => {
   });
 
   it('is never seeded by a production start on a new database', async () => {
-    const prod = startServerProcess({ ...(await newDataHome()), ...production });
-    started.push(prod);
+    const prod = processes.start({ ...(await newDataHome()), ...production });
     const url = await prod.ready;
     expect(prod.output()).not.toContain('Demo API key');
     const call = await fetch(`${url}/api/v1/templates`, { headers: bearer });

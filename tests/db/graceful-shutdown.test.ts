@@ -1,35 +1,14 @@
 import http from 'node:http';
 import { asc, like } from 'drizzle-orm';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { openDatabase } from '../../server/db/client';
 import { auditLog } from '../../server/db/schema/audit';
-import { makeTempDir, startServerProcess, stopProcess, type ServerProcess } from '../helpers/server-process';
-import { createPostgresCopy, pgliteSnapshotFile } from '../helpers/test-database';
+import { serverProcesses } from '../helpers/server-process';
 
-const started: ServerProcess[] = [];
-const cleanups: (() => unknown)[] = [];
-afterEach(async () => {
-  await Promise.all(started.splice(0).map(stopProcess));
-  for (const cleanup of cleanups.splice(0)) await cleanup();
-});
+const processes = serverProcesses('shutdown');
+const newDataHome = processes.newDataHome;
 
-/** Where the server keeps its data in this run: a new PGlite folder, or a new PostgreSQL database. */
-async function newDataHome(): Promise<Record<string, string>> {
-  const postgres = await createPostgresCopy();
-  if (postgres) {
-    cleanups.push(() => postgres.drop());
-    return { DATABASE_URL: postgres.url };
-  }
-  const temp = makeTempDir('shutdown');
-  cleanups.push(() => temp.remove());
-  return { DATA_DIR: temp.dir, DB_SNAPSHOT: pgliteSnapshotFile() };
-}
-
-function start(home: Record<string, string>) {
-  const server = startServerProcess(home);
-  started.push(server);
-  return server;
-}
+const start = processes.start;
 
 /** Sends the head and half the body of a request, and returns a way to finish it. */
 function beginRequest(url: string) {

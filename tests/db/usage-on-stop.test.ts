@@ -1,30 +1,14 @@
 import { eq } from 'drizzle-orm';
-import { afterEach, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { openDatabase } from '../../server/db/client';
 import type { DatabaseHandle } from '../../server/db/database';
 import { apiKeys, usageCounters } from '../../server/db/schema/api-access';
 import { seedDemoData } from '../../server/db/seed';
 import { ApiKeyService } from '../../server/services/api-keys/api-keys';
-import { makeTempDir, startServerProcess, stopProcess, type ServerProcess } from '../helpers/server-process';
-import { createPostgresCopy, pgliteSnapshotFile } from '../helpers/test-database';
+import { serverProcesses } from '../helpers/server-process';
 
-const started: ServerProcess[] = [];
-const cleanups: (() => unknown)[] = [];
-afterEach(async () => {
-  await Promise.all(started.splice(0).map(stopProcess));
-  for (const cleanup of cleanups.splice(0)) await cleanup();
-});
-
-async function newDataHome(): Promise<Record<string, string>> {
-  const postgres = await createPostgresCopy();
-  if (postgres) {
-    cleanups.push(() => postgres.drop());
-    return { DATABASE_URL: postgres.url };
-  }
-  const temp = makeTempDir('usage-stop');
-  cleanups.push(() => temp.remove());
-  return { DATA_DIR: temp.dir, DB_SNAPSHOT: pgliteSnapshotFile() };
-}
+const processes = serverProcesses('usage-stop');
+const newDataHome = processes.newDataHome;
 
 const open = (home: Record<string, string>): Promise<DatabaseHandle> =>
   openDatabase({ dataDir: home.DATA_DIR ?? 'memory', databaseUrl: home.DATABASE_URL, snapshotFile: home.DB_SNAPSHOT });
@@ -49,8 +33,7 @@ describe('stopping the server', { timeout: 90_000 }, () => {
       await before.close();
     }
 
-    const server = startServerProcess(home);
-    started.push(server);
+    const server = processes.start(home);
     const url = await server.ready;
     const res = await fetch(`${url}/api/v1/templates`, { headers: { Authorization: `Bearer ${key}` } });
     expect(res.status).toBe(200);

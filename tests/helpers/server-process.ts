@@ -3,6 +3,8 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
+import { afterEach } from 'vitest';
+import { createPostgresCopy, pgliteSnapshotFile } from './test-database';
 
 const root = fileURLToPath(new URL('../..', import.meta.url));
 const READY = /Pinwork is running at (http:\/\/\S+)/;
@@ -61,4 +63,36 @@ export async function stopProcess(server: ServerProcess | undefined): Promise<vo
   const timer = setTimeout(() => server.child.kill('SIGKILL'), 10_000);
   await server.exited;
   clearTimeout(timer);
+}
+
+/**
+ * Real server processes for the tests of one file: `newDataHome()` gives a test its own data (a
+ * PGlite folder started from the snapshot, or a PostgreSQL copy when the run has DATABASE_URL)
+ * and `start(env)` a process on it; after each test every process is stopped and every home
+ * removed.
+ */
+export function serverProcesses(label: string) {
+  const started: ServerProcess[] = [];
+  const cleanups: (() => unknown)[] = [];
+  afterEach(async () => {
+    await Promise.all(started.splice(0).map(stopProcess));
+    for (const cleanup of cleanups.splice(0)) await cleanup();
+  });
+  return {
+    async newDataHome(): Promise<Record<string, string>> {
+      const postgres = await createPostgresCopy();
+      if (postgres) {
+        cleanups.push(() => postgres.drop());
+        return { DATABASE_URL: postgres.url };
+      }
+      const temp = makeTempDir(label);
+      cleanups.push(() => temp.remove());
+      return { DATA_DIR: temp.dir, DB_SNAPSHOT: pgliteSnapshotFile() };
+    },
+    start(env: Record<string, string>): ServerProcess {
+      const server = startServerProcess(env);
+      started.push(server);
+      return server;
+    },
+  };
 }
