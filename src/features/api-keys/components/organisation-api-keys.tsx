@@ -1,13 +1,13 @@
 import { useState } from 'react';
 import type { ApiKeyInfo, CreatedApiKey } from '../../../../shared/api/v1';
 import { cardClass, primaryButtonClass } from '../../../components/form-styles';
+import { ModalDialog } from '../../../components/modal-dialog';
 import { Notice } from '../../../components/notice';
 import { formErrorsFrom } from '../../../lib/form-errors';
 import { useKeys } from '../api/get-keys';
 import type { KeyOwner } from '../api/key-owner';
 import { useRevokeKey } from '../api/revoke-key';
 import { CreateKeyForm } from './create-key-form';
-import { KeyDialog } from './key-dialog';
 import { KeyTable } from './key-table';
 import { NewKeyPanel } from './new-key-panel';
 import { RevokeKeyDialog } from './revoke-key-dialog';
@@ -42,7 +42,7 @@ export function OrganisationApiKeys({ organisationId, organisationName, canManag
   return (
     <>
       {/* The dialogs come first: their close effect (focus back to the opener) must run before the new key's panel takes focus. */}
-      <KeyDialog open={open !== null} title={open?.kind === 'rotate' ? `Rotate “${open.key.name}”` : 'A new API key'} onClose={() => setOpen(null)}>
+      <ModalDialog width="xl" open={open !== null} title={open?.kind === 'rotate' ? `Rotate “${open.key.name}”` : 'A new API key'} onClose={() => setOpen(null)}>
         {() =>
           open?.kind === 'rotate' ? (
             <RotateKeyForm owner={owner} apiKey={open.key} onRotated={(c) => shown(c, true)} onCancel={() => setOpen(null)} />
@@ -50,7 +50,7 @@ export function OrganisationApiKeys({ organisationId, organisationName, canManag
             <CreateKeyForm owner={owner} onCreated={(c) => shown(c, false)} onCancel={() => setOpen(null)} />
           )
         }
-      </KeyDialog>
+      </ModalDialog>
       <RevokeKeyDialog
         apiKey={revoking}
         pending={revoke.isPending}
