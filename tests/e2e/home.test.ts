@@ -187,6 +187,17 @@ describe('the built app served by the Pinwork server', () => {
     expect(await page.getByTestId('health-version').textContent()).toBe('9.9.9');
   });
 
+  it('drops its colour fades for a visitor who asks for reduced motion', async () => {
+    await page.goto(server.url, { waitUntil: 'networkidle' });
+    const durations = await page.evaluate(() => ({
+      asked: window.matchMedia('(prefers-reduced-motion: reduce)').matches,
+      fading: [...document.querySelectorAll('[class*="transition"]')].map((el) => getComputedStyle(el).transitionDuration),
+    }));
+    expect(durations.asked).toBe(true);
+    expect(durations.fading.length).toBeGreaterThan(0);
+    expect(new Set(durations.fading)).toEqual(new Set(['0s']));
+  });
+
   it('has no serious accessibility violations on the home page (axe-core)', async () => {
     await page.goto(server.url, { waitUntil: 'networkidle' });
     await page.getByTestId('health-server').waitFor();
