@@ -152,8 +152,8 @@ export function v1Router(deps: V1Deps): express.Router {
       const tag = etagFor(v.row.contentHash, { op: 'sweep', inputs: b.inputs, units: b.units, sweep: b.sweep, ...chartTagPart(format) });
       if (notModified(req, res, tag)) return;
       if (format === 'json') return sendAnswer(res, tag, () => catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units));
-      const out = await catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units);
-      sendSvg(res, await chartRenderer.sweep(tag, chartIdentity(v, b.units), out.sweep), `${slug}-${out.version}-sweep-${b.sweep.input}.svg`);
+      const svg = await chartRenderer.sweep(tag, chartIdentity(v, b.units), async () => (await catalogue.sweep(slug, v.row.semver, b.inputs, b.sweep, b.units)).sweep);
+      sendSvg(res, svg, `${slug}-${v.row.semver}-sweep-${b.sweep.input}.svg`);
     },
     sensitivityTemplate: async (req, res) => {
       const format = chartFormat(req, res);
@@ -163,8 +163,8 @@ export function v1Router(deps: V1Deps): express.Router {
       const tag = etagFor(v.row.contentHash, { op: 'sensitivity', inputs: b.inputs, units: b.units, tornado: b.tornado, ...chartTagPart(format) });
       if (notModified(req, res, tag)) return;
       if (format === 'json') return sendAnswer(res, tag, () => catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units));
-      const out = await catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units);
-      sendSvg(res, await chartRenderer.tornado(tag, chartIdentity(v, b.units), out.tornado), `${slug}-${out.version}-sensitivity-${b.tornado.result}.svg`);
+      const svg = await chartRenderer.tornado(tag, chartIdentity(v, b.units), async () => (await catalogue.sensitivity(slug, v.row.semver, b.inputs, b.tornado, b.units)).tornado);
+      sendSvg(res, svg, `${slug}-${v.row.semver}-sensitivity-${b.tornado.result}.svg`);
     },
     specSchema: (_req, res) => {
       res.setHeader('Cache-Control', 'public, max-age=300');

@@ -42,6 +42,28 @@ describe('answers kept by their ETag', () => {
     spy.mockRestore();
   });
 
+  it('draws a chart once and sweeps for it once, however often it is asked for', async () => {
+    const spy = vi.spyOn(V1Catalogue.prototype, 'sweep');
+    const ask = () =>
+      request(t.app)
+        .post('/api/v1/templates/wall-jib-tie-rod/sweep')
+        .set('Authorization', `Bearer ${key}`)
+        .set('Accept', 'image/svg+xml')
+        .send({ sweep: { input: 'L', from: 2100, to: 3900, steps: 5 } })
+        .buffer(true)
+        .parse((res, done) => {
+          let text = '';
+          res.on('data', (chunk: Buffer) => (text += chunk.toString('utf8')));
+          res.on('end', () => done(null, text));
+        });
+    const first = await ask();
+    const again = await ask();
+    expect(first.status).toBe(200);
+    expect(again.body).toBe(first.body);
+    expect(spy).toHaveBeenCalledTimes(1);
+    spy.mockRestore();
+  }, 60_000);
+
   it('keeps no refusal: a question the engine refuses is asked of it each time', async () => {
     const spy = vi.spyOn(V1Catalogue.prototype, 'solve');
     expectProblem(await solve({ L: 5 }), 422);

@@ -31,12 +31,13 @@ export class ChartRenderer {
     return made;
   }
 
-  sweep(key: string, id: ChartIdentity, sweep: SweepOutput): Promise<string> {
-    return this.remember(key, () => sweepSvg(this.pool, id, sweep));
+  /** The chart under `key`; its data is computed only when the chart is not kept already. */
+  sweep(key: string, id: ChartIdentity, data: () => Promise<SweepOutput>): Promise<string> {
+    return this.remember(key, async () => sweepSvg(this.pool, id, await data()));
   }
 
-  tornado(key: string, id: ChartIdentity, tornado: TornadoOutput): Promise<string> {
-    return this.remember(key, () => tornadoSvg(this.pool, id, tornado));
+  tornado(key: string, id: ChartIdentity, data: () => Promise<TornadoOutput>): Promise<string> {
+    return this.remember(key, async () => tornadoSvg(this.pool, id, await data()));
   }
 
   /** Starts the worker ahead of the first chart (it takes a few seconds to load). */
