@@ -5,7 +5,6 @@ import { Notice } from '../../../components/notice';
 import { formErrorsFrom } from '../../../lib/form-errors';
 import { useKeys } from '../api/get-keys';
 import type { KeyOwner } from '../api/key-owner';
-import { useRevokeKey } from '../api/revoke-key';
 import { KeyTable } from './key-table';
 import { keyStateNames, keyStatus, type KeyState } from './key-status';
 import { RevokeKeyDialog } from './revoke-key-dialog';
@@ -17,7 +16,6 @@ const OWN = 'own';
 /** Every API key, filtered by organisation and state, with revocation and the usage of all keys. */
 export function AdminApiKeys() {
   const keys = useKeys(owner);
-  const revoke = useRevokeKey(owner);
   const [organisation, setOrganisation] = useState('');
   const [state, setState] = useState<'' | KeyState>('');
   const [revoking, setRevoking] = useState<ApiKeyInfo | null>(null);
@@ -82,10 +80,7 @@ export function AdminApiKeys() {
               canManage
               organisationNames={names}
               now={now}
-              onRevoke={(key) => {
-                revoke.reset();
-                setRevoking(key);
-              }}
+              onRevoke={setRevoking}
             />
           </>
         )}
@@ -96,18 +91,13 @@ export function AdminApiKeys() {
       </section>
 
       <RevokeKeyDialog
+        owner={owner}
         apiKey={revoking}
-        pending={revoke.isPending}
-        error={revoke.error}
         onClose={() => setRevoking(null)}
-        onConfirm={(key) =>
-          revoke.mutate(key.id, {
-            onSuccess: () => {
-              setRevoking(null);
-              setDone(`${key.name} (${key.prefix}…) is revoked.`);
-            },
-          })
-        }
+        onRevoked={(key) => {
+          setRevoking(null);
+          setDone(`${key.name} (${key.prefix}…) is revoked.`);
+        }}
       />
     </div>
   );

@@ -6,7 +6,6 @@ import { Notice } from '../../../components/notice';
 import { formErrorsFrom } from '../../../lib/form-errors';
 import { useKeys } from '../api/get-keys';
 import type { KeyOwner } from '../api/key-owner';
-import { useRevokeKey } from '../api/revoke-key';
 import { CreateKeyForm } from './create-key-form';
 import { KeyTable } from './key-table';
 import { NewKeyPanel } from './new-key-panel';
@@ -27,7 +26,6 @@ type Open = { kind: 'create' } | { kind: 'rotate'; key: ApiKeyInfo } | null;
 export function OrganisationApiKeys({ organisationId, organisationName, canManage }: Props) {
   const owner: KeyOwner = { organisationId };
   const keys = useKeys(owner);
-  const revoke = useRevokeKey(owner);
   const [open, setOpen] = useState<Open>(null);
   const [fresh, setFresh] = useState<{ created: CreatedApiKey; rotated: boolean } | null>(null);
   const [revoking, setRevoking] = useState<ApiKeyInfo | null>(null);
@@ -52,19 +50,14 @@ export function OrganisationApiKeys({ organisationId, organisationName, canManag
         }
       </ModalDialog>
       <RevokeKeyDialog
+        owner={owner}
         apiKey={revoking}
-        pending={revoke.isPending}
-        error={revoke.error}
         onClose={() => setRevoking(null)}
-        onConfirm={(key) =>
-          revoke.mutate(key.id, {
-            onSuccess: () => {
-              setRevoking(null);
-              setDone(`${key.name} (${key.prefix}…) is revoked; calls with it are refused.`);
-              if (fresh?.created.info.id === key.id) setFresh(null);
-            },
-          })
-        }
+        onRevoked={(key) => {
+          setRevoking(null);
+          setDone(`${key.name} (${key.prefix}…) is revoked; calls with it are refused.`);
+          if (fresh?.created.info.id === key.id) setFresh(null);
+        }}
       />
       <section aria-labelledby="api-keys-heading" className={cardClass} data-api-keys>
         <div className="flex flex-wrap items-start justify-between gap-3">
@@ -96,10 +89,7 @@ export function OrganisationApiKeys({ organisationId, organisationName, canManag
               caption={`API keys of ${organisationName}`}
               canManage={canManage}
               onRotate={(key) => setOpen({ kind: 'rotate', key })}
-              onRevoke={(key) => {
-                revoke.reset();
-                setRevoking(key);
-              }}
+              onRevoke={setRevoking}
             />
           )}
         </div>
